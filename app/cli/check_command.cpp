@@ -1,0 +1,94 @@
+#include "cli_commands.h"
+
+#include "io/project_io.h"
+
+#include <iomanip>
+#include <sstream>
+
+namespace abut::cli {
+
+namespace {
+
+std::string fixed(double v, int digits = 1) {
+    std::ostringstream ss;
+    ss << std::fixed << std::setprecision(digits) << v;
+    return ss.str();
+}
+
+struct BriefSummary {
+    int rooms = 0, doors = 0, walls = 0, musts = 0, shoulds = 0, facadeWishes = 0;
+    double targetArea = 0, footprintArea = 0;
+    Footprint footprint;
+    bool footprintGiven = false;
+};
+
+BriefSummary summarize(const Brief& brief) {
+    BriefSummary s;
+    s.rooms = static_cast<int>(brief.rooms.size());
+    for (const Adjacency& a : brief.adjacencies) {
+        (a.kind == AdjacencyKind::Door ? s.doors : s.walls)++;
+        (a.priority == Priority::Must ? s.musts : s.shoulds)++;
+    }
+    for (const Room& r : brief.rooms) s.facadeWishes += r.facade.empty() ? 0 : 1;
+    s.targetArea = brief.totalTargetArea();
+    s.footprint = brief.effectiveFootprint();
+    s.footprintGiven = brief.footprint.has_value();
+    s.footprintArea = s.footprint.width * s.footprint.depth;
+    return s;
+}
+
+} // namespace
+
+int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostream& err) {
+    std::string path;
+    bool json = false;
+    for (const std::string& a : args) {
+        if (a == "--json") json = true;
+        else if (!a.empty() && a[0] == '-') {
+            err << "abut-cli check: unknown option \"" << a << "\"\n";
+            return exitBadInput;
+        } else if (path.empty()) path = a;
+        else {
+            err << "abut-cli check: more than one project given\n";
+            return exitBadInput;
+        }
+    }
+    if (path.empty()) {
+        err << "usage: abut-cli check PROJECT [--json]\n";
+        return exitBadInput;
+    }
+    const LoadResult loaded = loadProject(path);
+    if (!loaded.ok()) {
+        for (const FileError& e : loaded.errors) err << e.toString() << "\n";
+        return exitBadInput;
+    }
+    const Brief& brief = loaded.brief;
+    const BriefSummary s = summarize(brief);
+    const std::string u = brief.units;
+    if (json) {
+        OrderedJson j;
+        j["file"] = path;
+        j["rooms"] = s.rooms;
+        j["adjacencies"] = {{"door", s.doors}, {"wall", s.walls}, {"must", s.musts},
+                            {"should", s.shoulds}};
+        j["targetArea"] = s.targetArea;
+        j["footprint"] = {{"width", s.footprint.width}, {"depth", s.footprint.depth},
+                          {"given", s.footprintGiven}};
+        out << j.dump(2) << "\n";
+        return exitOk;
+    }
+    out << path << "\n";
+    out << "  rooms:        " << s.rooms << " (" << s.facadeWishes << " with facade wishes)\n";
+    out << "  adjacencies:  " << (s.doors + s.walls) << " (" << s.doors << " door, " << s.walls
+        << " wall; " << s.musts << " must, " << s.shoulds << " should)\n";
+    out << "  target area:  " << fixed(s.targetArea) << " " << u << "²\n";
+    out << "  footprint:    " << fixed(s.footprint.width, 2) << " × " << fixed(s.footprint.depth, 2)
+        << " " << u << " = " << fixed(s.footprintArea) << " " << u << "²"
+        << (s.footprintGiven ? "" : " (none given: sized to the target area)") << "\n";
+    if (s.footprintArea > 0)
+        out << "  spare area:   " << fixed(s.footprintArea - s.targetArea) << " " << u << "² ("
+            << fixed(100.0 * (s.footprintArea - s.targetArea) / s.footprintArea) << "%)\n";
+    return exitOk;
+}
+
+} // namespace abut::cli

@@ -1,0 +1,33 @@
+// abut-cli: the command-line front end for batch use and tests. The commands
+// and exit codes follow the project's file-format contract.
+#include "cli_commands.h"
+
+#include <cstring>
+#include <iostream>
+#include <string>
+#include <vector>
+
+namespace {
+
+void printUsage(std::ostream& out) {
+    out << "usage: abut-cli COMMAND ...\n"
+           "  check PROJECT [--json]     validate a brief and say whether a plan exists\n"
+           "  --help                     this text\n"
+           "exit codes: 0 done/feasible, 2 bad input, 3 no plan (infeasible)\n";
+}
+
+} // namespace
+
+int main(int argc, char** argv) {
+    std::vector<std::string> args(argv + 1, argv + argc);
+    if (args.empty() || args[0] == "--help" || args[0] == "-h") {
+        printUsage(args.empty() ? std::cerr : std::cout);
+        return args.empty() ? abut::cli::exitBadInput : 0;
+    }
+    const std::string command = args[0];
+    args.erase(args.begin());
+    if (command == "check") return abut::cli::runCheck(args, std::cout, std::cerr);
+    std::cerr << "abut-cli: unknown command \"" << command << "\"\n";
+    printUsage(std::cerr);
+    return abut::cli::exitBadInput;
+}

@@ -1,0 +1,66 @@
+// abut: the editor. `abut [PROJECT]` opens a brief;
+// `abut --screenshot OUT.png [--size WxH] PROJECT` renders the window to a PNG
+// and exits (works with QT_QPA_PLATFORM=offscreen).
+#include "main_window.h"
+#include "sketch_view.h"
+
+#include <QApplication>
+#include <QCommandLineParser>
+#include <QPixmap>
+#include <QTimer>
+
+#include <iostream>
+
+int main(int argc, char** argv) {
+    QApplication app(argc, argv);
+    QApplication::setApplicationName(QStringLiteral("Abut"));
+    QApplication::setOrganizationName(QStringLiteral("Abut"));
+    QApplication::setApplicationVersion(QStringLiteral(ABUT_VERSION));
+
+    QCommandLineParser parser;
+    parser.setApplicationDescription(QStringLiteral("Rectangular floorplans from adjacency briefs"));
+    parser.addHelpOption();
+    parser.addVersionOption();
+    QCommandLineOption shotOpt(QStringLiteral("screenshot"),
+                               QStringLiteral("Render the window to FILE.png and exit."),
+                               QStringLiteral("FILE"));
+    QCommandLineOption sizeOpt(QStringLiteral("size"), QStringLiteral("Window size for --screenshot."),
+                               QStringLiteral("WxH"), QStringLiteral("1400x900"));
+    parser.addOption(shotOpt);
+    parser.addOption(sizeOpt);
+    parser.addPositionalArgument(QStringLiteral("project"), QStringLiteral("A brief (*.abut.json)."));
+    parser.process(app);
+
+    abut::gui::MainWindow window;
+    const QStringList files = parser.positionalArguments();
+    if (!files.isEmpty()) {
+        if (parser.isSet(shotOpt)) {
+            QStringList errors;
+            if (!window.openProject(files.first(), &errors)) {
+                for (const QString& e : errors) std::cerr << e.toStdString() << "\n";
+                return 2;
+            }
+        } else {
+            window.openProject(files.first());
+        }
+    }
+
+    if (parser.isSet(shotOpt)) {
+        const QStringList wh = parser.value(sizeOpt).split(QLatin1Char('x'));
+        if (wh.size() == 2) window.resize(wh[0].toInt(), wh[1].toInt());
+        window.show();
+        QTimer::singleShot(300, &window, [&] {
+            window.sketchView()->fitAll();
+            const QString out = parser.value(shotOpt);
+            if (!window.grab().save(out)) {
+                std::cerr << "abut: cannot write " << out.toStdString() << "\n";
+                QApplication::exit(2);
+                return;
+            }
+            QApplication::exit(0);
+        });
+        return app.exec();
+    }
+    window.show();
+    return app.exec();
+}

@@ -1,0 +1,90 @@
+// The brief: what the planner asks for. Rooms with target areas, required
+// adjacencies, facade wishes, footprint. Plain data; validation lives in
+// brief/validate.h, file reading and writing in io/project_io.h.
+#pragma once
+
+#include <nlohmann/json.hpp>
+
+#include <array>
+#include <cstdint>
+#include <optional>
+#include <string>
+#include <utility>
+#include <vector>
+
+namespace abut {
+
+using OrderedJson = nlohmann::ordered_json;
+
+// Facade sides, clockwise from north as seen on a plan with north up.
+enum class Side : std::uint8_t { N = 0, E = 1, S = 2, W = 3 };
+constexpr std::array<Side, 4> allSides{Side::N, Side::E, Side::S, Side::W};
+char sideLetter(Side s);
+std::optional<Side> sideFromLetter(const std::string& s);
+
+// Which facade sides a room must reach. `anySide` means "some exterior wall".
+struct FacadeWish {
+    std::uint8_t sides = 0; // bit (1 << Side)
+    bool anySide = false;
+
+    bool empty() const { return sides == 0 && !anySide; }
+    bool has(Side s) const { return sides & (1u << static_cast<unsigned>(s)); }
+    void add(Side s) { sides |= static_cast<std::uint8_t>(1u << static_cast<unsigned>(s)); }
+    bool operator==(const FacadeWish&) const = default;
+};
+
+enum class AdjacencyKind : std::uint8_t { Door, Wall };
+enum class Priority : std::uint8_t { Must, Should };
+
+struct Room {
+    std::string id;
+    std::string name;
+    double area = 0.0;                   // target area, units²
+    std::optional<double> minWidth;      // units
+    std::optional<double> maxAspect;     // long side / short side, >= 1
+    std::string category;
+    FacadeWish facade;
+    OrderedJson unknownFields = OrderedJson::object(); // kept for the round trip
+
+    const std::string& displayName() const { return name.empty() ? id : name; }
+};
+
+struct Adjacency {
+    std::string a, b; // room ids
+    AdjacencyKind kind = AdjacencyKind::Door;
+    Priority priority = Priority::Must;
+    OrderedJson unknownFields = OrderedJson::object();
+};
+
+struct Footprint {
+    double width = 0.0; // x extent, east-west
+    double depth = 0.0; // y extent, north-south
+    bool operator==(const Footprint&) const = default;
+};
+
+struct SketchPoint {
+    double x = 0.0, y = 0.0;
+    bool operator==(const SketchPoint&) const = default;
+};
+
+struct Brief {
+    std::string units = "m"; // "m" or "ft"
+    std::optional<Footprint> footprint;
+    double doorWidth = 0.9; // shared wall needed by a door adjacency, units
+    std::vector<Room> rooms;
+    std::vector<Adjacency> adjacencies;
+    std::vector<std::pair<std::string, SketchPoint>> sketch; // in file order
+    OrderedJson unknownFields = OrderedJson::object();
+
+    // Index of the room with this id, or -1.
+    int roomIndex(const std::string& id) const;
+    double totalTargetArea() const;
+    // The given footprint, or a square-ish rectangle of the total target area.
+    Footprint effectiveFootprint() const;
+    const SketchPoint* sketchPosition(const std::string& id) const;
+};
+
+const char* toString(AdjacencyKind k);
+const char* toString(Priority p);
+
+} // namespace abut

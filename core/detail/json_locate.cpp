@@ -1,0 +1,105 @@
+#include "detail/json_locate.h"
+
+#include <vector>
+
+namespace abut::detail {
+
+namespace {
+
+std::string escapePointerToken(const std::string& token) {
+    std::string out;
+    for (char c : token) {
+        if (c == '~') out += "~0";
+        else if (c == '/') out += "~1";
+        else out += c;
+    }
+    return out;
+}
+
+struct Frame {
+    bool isArray = false;
+    int index = -1;         // arrays: index of the current element
+    std::string key;        // objects: key of the current member
+    bool expectKey = false; // objects: next string is a key
+};
+
+std::string pointerOf(const std::vector<Frame>& stack) {
+    std::string p;
+    for (const Frame& f : stack)
+        p += "/" + (f.isArray ? std::to_string(f.index) : escapePointerToken(f.key));
+    return p;
+}
+
+} // namespace
+
+int lineOfOffset(std::string_view text, std::size_t offset) {
+    int line = 1;
+    for (std::size_t i = 0; i < offset && i < text.size(); ++i)
+        if (text[i] == '\n') ++line;
+    return line;
+}
+
+int lineOfJsonPointer(std::string_view text, const std::string& pointer) {
+    std::vector<Frame> stack;
+    int line = 1;
+    std::size_t i = 0;
+    // A value starts at the current position: does its pointer match?
+    auto valueStarts = [&]() {
+        if (!stack.empty() && stack.back().isArray) ++stack.back().index;
+        return pointerOf(stack) == pointer;
+    };
+    while (i < text.size()) {
+        const char c = text[i];
+        if (c == '\n') { ++line; ++i; continue; }
+        if (c == ' ' || c == '\t' || c == '\r' || c == ',' || c == ':') { ++i; continue; }
+        if (c == '}' || c == ']') {
+            if (!stack.empty()) stack.pop_back();
+            if (!stack.empty() && !stack.back().isArray) stack.back().expectKey = true;
+            ++i;
+            continue;
+        }
+        if (c == '"') {
+            std::string s;
+            const int startLine = line;
+            ++i;
+            while (i < text.size() && text[i] != '"') {
+                if (text[i] == '\\' && i + 1 < text.size()) {
+                    const char e = text[i + 1];
+                    s += (e == 'n' ? '\n' : e == 't' ? '\t' : e);
+                    i += 2;
+                    continue;
+                }
+                if (text[i] == '\n') ++line;
+                s += text[i++];
+            }
+            ++i;
+            if (!stack.empty() && !stack.back().isArray && stack.back().expectKey) {
+                stack.back().key = s;
+                stack.back().expectKey = false;
+                if (pointerOf(stack) == pointer) return startLine;
+                continue;
+            }
+            if (valueStarts()) return startLine;
+            if (!stack.empty() && !stack.back().isArray) stack.back().expectKey = true;
+            continue;
+        }
+        const bool matches = valueStarts();
+        if (matches) return line;
+        if (c == '{' || c == '[') {
+            Frame f;
+            f.isArray = (c == '[');
+            f.expectKey = !f.isArray;
+            stack.push_back(f);
+            ++i;
+            continue;
+        }
+        // number, true, false, null
+        while (i < text.size() && text[i] != ',' && text[i] != '}' && text[i] != ']' &&
+               text[i] != '\n' && text[i] != ' ')
+            ++i;
+        if (!stack.empty() && !stack.back().isArray) stack.back().expectKey = true;
+    }
+    return 0;
+}
+
+} // namespace abut::detail

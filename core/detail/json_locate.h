@@ -1,0 +1,16 @@
+#pragma once
+
+#include <string>
+#include <string_view>
+
+namespace abut::detail {
+
+// 1-based line of the value addressed by a JSON Pointer (RFC 6901) in `text`,
+// or 0 when the text does not contain it. Precondition: `text` is valid JSON.
+// O(size of text); iterative, so deep nesting cannot exhaust the stack.
+int lineOfJsonPointer(std::string_view text, const std::string& pointer);
+
+// 1-based line of a byte offset.
+int lineOfOffset(std::string_view text, std::size_t offset);
+
+} // namespace abut::detail

@@ -1,0 +1,418 @@
+#include "io/project_io.h"
+
+#include "detail/json_locate.h"
+#include "io/atomic_file.h"
+
+#include <cmath>
+#include <set>
+#include <sstream>
+
+namespace abut {
+
+std::string FileError::toString() const {
+    std::string s = file;
+    if (line > 0) s += ":" + std::to_string(line);
+    s += ": ";
+    if (!pointer.empty()) s += pointer + ": ";
+    return s + message;
+}
+
+namespace {
+
+std::string formatNumber(double v) {
+    std::ostringstream ss;
+    ss << v;
+    return ss.str();
+}
+
+std::string describe(const OrderedJson& v) {
+    std::string d = v.dump();
+    if (d.size() > 40) d = d.substr(0, 37) + "...";
+    return d;
+}
+
+class Reader {
+public:
+    Reader(const std::string& text, const std::string& file) : text_(text), file_(file) {}
+
+    void error(const std::string& pointer, const std::string& message) {
+        FileError e;
+        e.file = file_;
+        e.pointer = pointer;
+        e.line = detail::lineOfJsonPointer(text_, pointer);
+        e.message = message;
+        errors.push_back(std::move(e));
+    }
+
+    // A number that must be finite and > 0 (or >= `minimum` when given).
+    std::optional<double> positive(const OrderedJson& obj, const std::string& key,
+                                   const std::string& ptr, const char* what,
+                                   std::optional<double> atLeast = std::nullopt) {
+        const OrderedJson& v = obj.at(key);
+        if (!v.is_number()) {
+            error(ptr, std::string(what) + " must be a number, got " + describe(v));
+            return std::nullopt;
+        }
+        const double d = v.get<double>();
+        if (!std::isfinite(d)) {
+            error(ptr, std::string(what) + " must be a finite number");
+            return std::nullopt;
+        }
+        if (atLeast ? d < *atLeast : d <= 0.0) {
+            error(ptr, std::string(what) + (atLeast ? " must be at least " + formatNumber(*atLeast)
+                                                    : std::string(" must be greater than 0")) +
+                           ", got " + formatNumber(d));
+            return std::nullopt;
+        }
+        return d;
+    }
+
+    std::optional<std::string> string(const OrderedJson& obj, const std::string& key,
+                                      const std::string& ptr, const char* what) {
+        const OrderedJson& v = obj.at(key);
+        if (!v.is_string()) {
+            error(ptr, std::string(what) + " must be a string, got " + describe(v));
+            return std::nullopt;
+        }
+        return v.get<std::string>();
+    }
+
+    std::vector<FileError> errors;
+
+private:
+    const std::string& text_;
+    const std::string& file_;
+};
+
+OrderedJson unknownOf(const OrderedJson& obj, std::initializer_list<const char*> known) {
+    OrderedJson extra = OrderedJson::object();
+    for (auto it = obj.begin(); it != obj.end(); ++it) {
+        bool isKnown = false;
+        for (const char* k : known) isKnown = isKnown || it.key() == k;
+        if (!isKnown) extra[it.key()] = it.value();
+    }
+    return extra;
+}
+
+void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& brief) {
+    if (!j.is_object()) {
+        r.error(ptr, "each room must be a JSON object, got " + describe(j));
+        return;
+    }
+    Room room;
+    if (!j.contains("id")) r.error(ptr, "room has no \"id\"");
+    else if (auto id = r.string(j, "id", ptr + "/id", "id")) {
+        if (id->empty()) r.error(ptr + "/id", "id must not be empty");
+        room.id = *id;
+    }
+    if (j.contains("name"))
+        if (auto name = r.string(j, "name", ptr + "/name", "name")) room.name = *name;
+    if (!j.contains("area")) r.error(ptr, "room \"" + room.id + "\" has no \"area\" (target area)");
+    else if (auto a = r.positive(j, "area", ptr + "/area", "area")) room.area = *a;
+    if (j.contains("minWidth"))
+        if (auto w = r.positive(j, "minWidth", ptr + "/minWidth", "minWidth")) room.minWidth = *w;
+    if (j.contains("maxAspect"))
+        if (auto m = r.positive(j, "maxAspect", ptr + "/maxAspect", "maxAspect", 1.0))
+            room.maxAspect = *m;
+    if (j.contains("category"))
+        if (auto c = r.string(j, "category", ptr + "/category", "category")) room.category = *c;
+    if (j.contains("facade")) {
+        const OrderedJson& f = j.at("facade");
+        if (!f.is_array()) {
+            r.error(ptr + "/facade", "facade must be a list of sides such as [\"N\", \"E\"] or [\"any\"]");
+        } else {
+            for (std::size_t k = 0; k < f.size(); ++k) {
+                const std::string p = ptr + "/facade/" + std::to_string(k);
+                const std::string s = f[k].is_string() ? f[k].get<std::string>() : "";
+                if (s == "any") room.facade.anySide = true;
+                else if (auto side = sideFromLetter(s)) room.facade.add(*side);
+                else
+                    r.error(p, "unknown facade side " + describe(f[k]) +
+                                   "; use \"N\", \"E\", \"S\", \"W\" or \"any\"");
+            }
+        }
+    }
+    room.unknownFields =
+        unknownOf(j, {"id", "name", "area", "minWidth", "maxAspect", "category", "facade"});
+    brief.rooms.push_back(std::move(room));
+}
+
+void readAdjacency(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& brief) {
+    if (!j.is_object()) {
+        r.error(ptr, "each adjacency must be a JSON object, got " + describe(j));
+        return;
+    }
+    Adjacency adj;
+    bool ok = true;
+    if (!j.contains("rooms")) {
+        r.error(ptr, "adjacency has no \"rooms\" (the two room ids it joins)");
+        ok = false;
+    } else {
+        const OrderedJson& pair = j.at("rooms");
+        if (!pair.is_array() || pair.size() != 2 || !pair[0].is_string() || !pair[1].is_string()) {
+            r.error(ptr + "/rooms", "rooms must be a list of two room ids, got " + describe(pair));
+            ok = false;
+        } else {
+            adj.a = pair[0].get<std::string>();
+            adj.b = pair[1].get<std::string>();
+            for (int k = 0; k < 2; ++k) {
+                const std::string& id = k == 0 ? adj.a : adj.b;
+                if (brief.roomIndex(id) < 0) {
+                    r.error(ptr + "/rooms/" + std::to_string(k),
+                            "adjacency names room \"" + id + "\", which the brief does not have");
+                    ok = false;
+                }
+            }
+            if (ok && adj.a == adj.b) {
+                r.error(ptr + "/rooms", "room \"" + adj.a + "\" cannot be adjacent to itself");
+                ok = false;
+            }
+        }
+    }
+    if (j.contains("kind")) {
+        auto k = r.string(j, "kind", ptr + "/kind", "kind");
+        if (k && *k == "door") adj.kind = AdjacencyKind::Door;
+        else if (k && *k == "wall") adj.kind = AdjacencyKind::Wall;
+        else if (k) r.error(ptr + "/kind", "unknown kind \"" + *k + "\"; use \"door\" or \"wall\"");
+    }
+    if (j.contains("priority")) {
+        auto p = r.string(j, "priority", ptr + "/priority", "priority");
+        if (p && *p == "must") adj.priority = Priority::Must;
+        else if (p && *p == "should") adj.priority = Priority::Should;
+        else if (p)
+            r.error(ptr + "/priority", "unknown priority \"" + *p + "\"; use \"must\" or \"should\"");
+    }
+    adj.unknownFields = unknownOf(j, {"rooms", "kind", "priority"});
+    if (ok) brief.adjacencies.push_back(std::move(adj));
+}
+
+void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
+    if (doc.contains("units")) {
+        auto u = r.string(doc, "units", "/units", "units");
+        if (u && (*u == "m" || *u == "ft")) brief.units = *u;
+        else if (u) r.error("/units", "unknown units \"" + *u + "\"; use \"m\" or \"ft\"");
+    }
+    if (doc.contains("footprint")) {
+        const OrderedJson& f = doc.at("footprint");
+        if (!f.is_object() || !f.contains("width") || !f.contains("depth")) {
+            r.error("/footprint", "footprint must be an object with \"width\" and \"depth\"");
+        } else {
+            auto w = r.positive(f, "width", "/footprint/width", "footprint width");
+            auto d = r.positive(f, "depth", "/footprint/depth", "footprint depth");
+            if (w && d) brief.footprint = Footprint{*w, *d};
+        }
+    }
+    if (doc.contains("doorWidth"))
+        if (auto w = r.positive(doc, "doorWidth", "/doorWidth", "doorWidth")) brief.doorWidth = *w;
+
+    if (!doc.contains("rooms")) {
+        r.error("", "the project has no \"rooms\" list");
+    } else if (!doc.at("rooms").is_array()) {
+        r.error("/rooms", "rooms must be a list");
+    } else {
+        const OrderedJson& rooms = doc.at("rooms");
+        std::set<std::string> seen;
+        for (std::size_t i = 0; i < rooms.size(); ++i) {
+            const std::string ptr = "/rooms/" + std::to_string(i);
+            const std::size_t before = brief.rooms.size();
+            readRoom(r, rooms[i], ptr, brief);
+            if (brief.rooms.size() > before && !brief.rooms.back().id.empty() &&
+                !seen.insert(brief.rooms.back().id).second)
+                r.error(ptr + "/id", "duplicate room id \"" + brief.rooms.back().id + "\"");
+        }
+    }
+    if (doc.contains("adjacencies")) {
+        const OrderedJson& adjs = doc.at("adjacencies");
+        if (!adjs.is_array()) {
+            r.error("/adjacencies", "adjacencies must be a list");
+        } else {
+            std::set<std::pair<std::string, std::string>> seen;
+            for (std::size_t i = 0; i < adjs.size(); ++i) {
+                const std::string ptr = "/adjacencies/" + std::to_string(i);
+                const std::size_t before = brief.adjacencies.size();
+                readAdjacency(r, adjs[i], ptr, brief);
+                if (brief.adjacencies.size() == before) continue;
+                const Adjacency& a = brief.adjacencies.back();
+                if (!seen.insert(std::minmax(a.a, a.b)).second)
+                    r.error(ptr + "/rooms", "rooms \"" + a.a + "\" and \"" + a.b +
+                                                "\" are listed as adjacent twice");
+            }
+        }
+    }
+    if (doc.contains("sketch")) {
+        const OrderedJson& sk = doc.at("sketch");
+        if (!sk.is_object()) {
+            r.error("/sketch", "sketch must be an object mapping room ids to [x, y]");
+        } else {
+            for (auto it = sk.begin(); it != sk.end(); ++it) {
+                const std::string ptr = "/sketch/" + it.key();
+                const OrderedJson& p = it.value();
+                if (brief.roomIndex(it.key()) < 0) {
+                    r.error(ptr, "sketch position for room \"" + it.key() +
+                                     "\", which the brief does not have");
+                } else if (!p.is_array() || p.size() != 2 || !p[0].is_number() ||
+                           !p[1].is_number() || !std::isfinite(p[0].get<double>()) ||
+                           !std::isfinite(p[1].get<double>())) {
+                    r.error(ptr, "a sketch position must be [x, y] with two finite numbers");
+                } else {
+                    brief.sketch.emplace_back(it.key(),
+                                              SketchPoint{p[0].get<double>(), p[1].get<double>()});
+                }
+            }
+        }
+    }
+    brief.unknownFields = unknownOf(doc, {"format", "version", "units", "footprint", "doorWidth",
+                                          "rooms", "adjacencies", "sketch"});
+}
+
+// Checks across fields that only make sense once each field is valid.
+void checkFit(Reader& r, const Brief& brief) {
+    if (!brief.footprint) return;
+    const Footprint fp = *brief.footprint;
+    const double total = brief.totalTargetArea();
+    const double available = fp.width * fp.depth;
+    if (total > available * (1.0 + 1e-9)) {
+        r.error("/footprint", "the rooms' target areas add up to " + formatNumber(total) + " " +
+                                  brief.units + "², more than the footprint's " +
+                                  formatNumber(available) + " " + brief.units + "² (" +
+                                  formatNumber(fp.width) + " × " + formatNumber(fp.depth) + ")");
+    }
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
+        const Room& room = brief.rooms[i];
+        if (room.minWidth && *room.minWidth > std::max(fp.width, fp.depth))
+            r.error("/rooms/" + std::to_string(i) + "/minWidth",
+                    "room \"" + room.id + "\" needs a width of " + formatNumber(*room.minWidth) +
+                        " " + brief.units + ", wider than the footprint");
+    }
+}
+
+} // namespace
+
+LoadResult parseProject(const std::string& text, const std::string& fileName) {
+    LoadResult result;
+    OrderedJson doc;
+    try {
+        doc = OrderedJson::parse(text);
+    } catch (const nlohmann::json::parse_error& e) {
+        FileError err;
+        err.file = fileName;
+        err.line = detail::lineOfOffset(text, e.byte > 0 ? e.byte - 1 : 0);
+        std::string what = e.what();
+        const auto colon = what.find("syntax error");
+        err.message = "not valid JSON: " + (colon != std::string::npos ? what.substr(colon) : what);
+        result.status = LoadStatus::NotJson;
+        result.errors.push_back(err);
+        return result;
+    } catch (const nlohmann::json::exception& e) {
+        // Out-of-range numbers such as 1e999: name the line of the literal.
+        std::string what = e.what();
+        const auto q1 = what.find('\'');
+        const auto q2 = what.rfind('\'');
+        std::size_t at = std::string::npos;
+        if (q1 != std::string::npos && q2 > q1) at = text.find(what.substr(q1 + 1, q2 - q1 - 1));
+        FileError err;
+        err.file = fileName;
+        err.line = at == std::string::npos ? 0 : detail::lineOfOffset(text, at);
+        const auto tail = what.find("] ");
+        err.message = "not valid JSON: " + (tail != std::string::npos ? what.substr(tail + 2) : what);
+        result.status = LoadStatus::NotJson;
+        result.errors.push_back(err);
+        return result;
+    }
+    Reader r(text, fileName);
+    if (!doc.is_object()) {
+        r.error("", "a project file must hold a JSON object");
+    } else if (!doc.contains("format") || doc.at("format") != "abut.project") {
+        r.error(doc.contains("format") ? "/format" : "",
+                "not an Abut project file (\"format\" must be \"abut.project\")");
+    } else if (!doc.contains("version") || !doc.at("version").is_number_integer()) {
+        r.error(doc.contains("version") ? "/version" : "", "\"version\" must be a whole number");
+    } else if (doc.at("version").get<long long>() > projectFormatVersion) {
+        r.error("/version", "the file is version " + doc.at("version").dump() +
+                                ", made by a newer Abut; this version reads version " +
+                                std::to_string(projectFormatVersion) + " and will not half-read it");
+        result.status = LoadStatus::NewerVersion;
+        result.errors = std::move(r.errors);
+        return result;
+    } else if (doc.at("version").get<long long>() < 1) {
+        r.error("/version", "unknown version " + doc.at("version").dump());
+    } else {
+        readBody(r, doc, result.brief);
+        if (r.errors.empty()) checkFit(r, result.brief);
+    }
+    if (!r.errors.empty()) {
+        result.status = LoadStatus::Invalid;
+        result.errors = std::move(r.errors);
+        result.brief = Brief{};
+    }
+    return result;
+}
+
+LoadResult loadProject(const std::string& path) {
+    std::string message;
+    auto text = readFile(path, &message);
+    if (!text) {
+        LoadResult result;
+        result.status = LoadStatus::Unreadable;
+        result.errors.push_back(FileError{path, 0, "", message.substr(message.find(": ") + 2)});
+        return result;
+    }
+    return parseProject(*text, path);
+}
+
+std::string serializeProject(const Brief& brief) {
+    OrderedJson doc = OrderedJson::object();
+    doc["format"] = "abut.project";
+    doc["version"] = projectFormatVersion;
+    doc["units"] = brief.units;
+    if (brief.footprint)
+        doc["footprint"] = {{"width", brief.footprint->width}, {"depth", brief.footprint->depth}};
+    doc["doorWidth"] = brief.doorWidth;
+    OrderedJson rooms = OrderedJson::array();
+    for (const Room& room : brief.rooms) {
+        OrderedJson j = OrderedJson::object();
+        j["id"] = room.id;
+        if (!room.name.empty()) j["name"] = room.name;
+        j["area"] = room.area;
+        if (room.minWidth) j["minWidth"] = *room.minWidth;
+        if (room.maxAspect) j["maxAspect"] = *room.maxAspect;
+        if (!room.category.empty()) j["category"] = room.category;
+        if (!room.facade.empty()) {
+            OrderedJson f = OrderedJson::array();
+            if (room.facade.anySide) f.push_back("any");
+            for (Side s : allSides)
+                if (room.facade.has(s)) f.push_back(std::string(1, sideLetter(s)));
+            j["facade"] = f;
+        }
+        for (auto it = room.unknownFields.begin(); it != room.unknownFields.end(); ++it)
+            j[it.key()] = it.value();
+        rooms.push_back(j);
+    }
+    doc["rooms"] = rooms;
+    OrderedJson adjs = OrderedJson::array();
+    for (const Adjacency& a : brief.adjacencies) {
+        OrderedJson j = OrderedJson::object();
+        j["rooms"] = {a.a, a.b};
+        j["kind"] = toString(a.kind);
+        j["priority"] = toString(a.priority);
+        for (auto it = a.unknownFields.begin(); it != a.unknownFields.end(); ++it)
+            j[it.key()] = it.value();
+        adjs.push_back(j);
+    }
+    doc["adjacencies"] = adjs;
+    if (!brief.sketch.empty()) {
+        OrderedJson sk = OrderedJson::object();
+        for (const auto& [id, p] : brief.sketch) sk[id] = {p.x, p.y};
+        doc["sketch"] = sk;
+    }
+    for (auto it = brief.unknownFields.begin(); it != brief.unknownFields.end(); ++it)
+        doc[it.key()] = it.value();
+    return doc.dump(2) + "\n";
+}
+
+SaveResult saveProject(const Brief& brief, const std::string& path) {
+    const WriteResult w = writeFileAtomically(path, serializeProject(brief));
+    return {w.ok, w.message};
+}
+
+} // namespace abut

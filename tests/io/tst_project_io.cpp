@@ -1,0 +1,175 @@
+// Project file reading and writing: every valid file loads, every invalid file
+// is refused with its expected message, and load → save → load is stable.
+#include "io/atomic_file.h"
+#include "io/project_io.h"
+
+#include <QDir>
+#include <QTemporaryDir>
+#include <QtTest>
+
+using namespace abut;
+
+namespace {
+
+QString dataDir() { return QStringLiteral(ABUT_TEST_DATA "/project"); }
+
+std::string readAll(const QString& path) {
+    QFile f(path);
+    if (!f.open(QIODevice::ReadOnly)) return {};
+    return f.readAll().toStdString();
+}
+
+std::string joined(const std::vector<FileError>& errors) {
+    std::string s;
+    for (const FileError& e : errors) s += e.toString() + "\n";
+    return s;
+}
+
+} // namespace
+
+class TestProjectIo : public QObject {
+    Q_OBJECT
+private slots:
+    void validFileLoads_data();
+    void validFileLoads();
+    void invalidFileRefused_data();
+    void invalidFileRefused();
+    void sampleLoads_data();
+    void sampleLoads();
+    void canonicalFileIsByteStable();
+    void unknownFieldsSurvive();
+    void defaultsApplied();
+    void failedSaveKeepsPreviousFile();
+    void saveIntoMissingFolderFails();
+    void unreadableFileNamed();
+};
+
+void TestProjectIo::validFileLoads_data() {
+    QTest::addColumn<QString>("path");
+    for (const QFileInfo& fi : QDir(dataDir() + "/valid").entryInfoList({"*.abut.json"}))
+        QTest::newRow(qPrintable(fi.fileName())) << fi.absoluteFilePath();
+}
+
+void TestProjectIo::validFileLoads() {
+    QFETCH(QString, path);
+    const LoadResult r = loadProject(path.toStdString());
+    QVERIFY2(r.ok(), joined(r.errors).c_str());
+    // Save and load again: the brief must survive, and a second save must give
+    // the same bytes as the first.
+    const std::string once = serializeProject(r.brief);
+    const LoadResult again = parseProject(once, "saved");
+    QVERIFY2(again.ok(), joined(again.errors).c_str());
+    QCOMPARE(serializeProject(again.brief), once);
+}
+
+void TestProjectIo::invalidFileRefused_data() {
+    QTest::addColumn<QString>("path");
+    QTest::addColumn<QString>("expected");
+    const QDir dir(dataDir() + "/invalid");
+    const auto files = dir.entryInfoList({"*.abut.json"});
+    QVERIFY(files.size() >= 20);
+    for (const QFileInfo& fi : files) {
+        const QString expectPath = dir.filePath(fi.fileName().replace(".abut.json", ".expect"));
+        QTest::newRow(qPrintable(fi.fileName()))
+            << fi.absoluteFilePath() << QString::fromStdString(readAll(expectPath)).trimmed();
+    }
+}
+
+void TestProjectIo::invalidFileRefused() {
+    QFETCH(QString, path);
+    QFETCH(QString, expected);
+    QVERIFY2(!expected.isEmpty(), "every invalid file needs a .expect file beside it");
+    const LoadResult r = loadProject(path.toStdString());
+    QVERIFY(!r.ok());
+    QVERIFY(!r.errors.empty());
+    const QString first = QString::fromStdString(r.errors.front().toString());
+    // One line, naming the file, containing the expected text.
+    QVERIFY2(!first.contains('\n'), qPrintable(first));
+    QVERIFY2(first.startsWith(path), qPrintable(first));
+    QVERIFY2(first.contains(expected), qPrintable(first + "\n  expected: " + expected));
+}
+
+void TestProjectIo::sampleLoads_data() {
+    QTest::addColumn<QString>("path");
+    const auto samples = QDir(QStringLiteral(ABUT_SAMPLES)).entryInfoList({"*.abut.json"});
+    QVERIFY(samples.size() >= 4);
+    for (const QFileInfo& fi : samples)
+        QTest::newRow(qPrintable(fi.fileName())) << fi.absoluteFilePath();
+}
+
+void TestProjectIo::sampleLoads() {
+    QFETCH(QString, path);
+    const LoadResult r = loadProject(path.toStdString());
+    QVERIFY2(r.ok(), joined(r.errors).c_str());
+    QVERIFY(r.brief.rooms.size() >= 4);
+    QVERIFY(r.brief.footprint.has_value());
+}
+
+void TestProjectIo::canonicalFileIsByteStable() {
+    // These files are written in the canonical layout: load → save gives them back.
+    for (const char* name : {"minimal.abut.json", "unknown-fields.abut.json"}) {
+        const QString path = dataDir() + "/valid/" + name;
+        const LoadResult r = loadProject(path.toStdString());
+        QVERIFY2(r.ok(), joined(r.errors).c_str());
+        QCOMPARE(serializeProject(r.brief), readAll(path));
+    }
+}
+
+void TestProjectIo::unknownFieldsSurvive() {
+    const LoadResult r = loadProject((dataDir() + "/valid/unknown-fields.abut.json").toStdString());
+    QVERIFY(r.ok());
+    QCOMPARE(r.brief.units, std::string("ft"));
+    QCOMPARE(r.brief.rooms[0].unknownFields["finish"].get<std::string>(), std::string("oak floor"));
+    QCOMPARE(r.brief.adjacencies[0].unknownFields["note"].get<std::string>(),
+             std::string("glazed screen"));
+    QCOMPARE(r.brief.unknownFields["client"]["reference"].get<std::string>(), std::string("demo-7"));
+    QVERIFY(r.brief.rooms[0].facade.anySide);
+    QVERIFY(r.brief.rooms[1].facade.has(Side::N) && r.brief.rooms[1].facade.has(Side::W));
+}
+
+void TestProjectIo::defaultsApplied() {
+    // Defaults from the format contract: kind door, priority must, units m, door 0.9.
+    const LoadResult r = loadProject((dataDir() + "/valid/defaults.abut.json").toStdString());
+    QVERIFY(r.ok());
+    QCOMPARE(r.brief.units, std::string("m"));
+    QCOMPARE(r.brief.doorWidth, 0.9);
+    QCOMPARE(r.brief.adjacencies[0].kind, AdjacencyKind::Door);
+    QCOMPARE(r.brief.adjacencies[0].priority, Priority::Must);
+    QVERIFY(!r.brief.footprint);
+    const Footprint fp = r.brief.effectiveFootprint();
+    QVERIFY(qAbs(fp.width * fp.depth - 15.5) < 1e-9);
+}
+
+void TestProjectIo::failedSaveKeepsPreviousFile() {
+    QTemporaryDir dir;
+    const std::string path = dir.filePath("brief.abut.json").toStdString();
+    const std::string previous = "previous contents\n";
+    QVERIFY(writeFileAtomically(path, previous).ok);
+    const std::string replacement(4096, 'x');
+    for (std::size_t failAt : {std::size_t(0), std::size_t(1), std::size_t(2000), std::size_t(4095)}) {
+        const WriteResult w = writeFileAtomically(path, replacement, WriteFault{failAt});
+        QVERIFY(!w.ok);
+        QVERIFY(QString::fromStdString(w.message).contains("previous file is unchanged"));
+        QCOMPARE(readAll(QString::fromStdString(path)), previous);
+    }
+    // No temporary files are left behind.
+    QCOMPARE(QDir(dir.path()).entryList(QDir::Files | QDir::Hidden).size(), 1);
+    QVERIFY(writeFileAtomically(path, replacement).ok);
+    QCOMPARE(readAll(QString::fromStdString(path)), replacement);
+}
+
+void TestProjectIo::saveIntoMissingFolderFails() {
+    Brief b;
+    const SaveResult s = saveProject(b, "/nonexistent-folder-for-abut/x.abut.json");
+    QVERIFY(!s.ok);
+    QVERIFY(QString::fromStdString(s.message).startsWith("/nonexistent-folder-for-abut/x.abut.json"));
+}
+
+void TestProjectIo::unreadableFileNamed() {
+    const LoadResult r = loadProject("/no/such/brief.abut.json");
+    QCOMPARE(r.status, LoadStatus::Unreadable);
+    QVERIFY(QString::fromStdString(r.errors.front().toString()).startsWith("/no/such/brief.abut.json: cannot open"));
+}
+
+QTEST_GUILESS_MAIN(TestProjectIo)
+#include "tst_project_io.moc"
