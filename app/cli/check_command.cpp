@@ -1,5 +1,6 @@
 #include "cli_commands.h"
 
+#include "augment/augment.h"
 #include "io/project_io.h"
 
 #include <iomanip>
@@ -64,18 +65,46 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     }
     const Brief& brief = loaded.brief;
     const BriefSummary s = summarize(brief);
+    const AugmentResult plan = buildExtendedGraph(brief);
+    const int code = plan.status == AugmentStatus::Feasible ? exitOk
+                     : plan.status == AugmentStatus::Empty  ? exitOk
+                                                            : exitNoPlan;
     const std::string u = brief.units;
+    auto idsOf = [&](const std::vector<int>& rooms) {
+        std::vector<std::string> ids;
+        for (int r : rooms) ids.push_back(brief.rooms[r].id);
+        return ids;
+    };
     if (json) {
         OrderedJson j;
         j["file"] = path;
+        j["status"] = toString(plan.status);
+        j["feasible"] = plan.status == AugmentStatus::Feasible;
+        j["summary"] = plan.summary;
         j["rooms"] = s.rooms;
         j["adjacencies"] = {{"door", s.doors}, {"wall", s.walls}, {"must", s.musts},
                             {"should", s.shoulds}};
         j["targetArea"] = s.targetArea;
         j["footprint"] = {{"width", s.footprint.width}, {"depth", s.footprint.depth},
                           {"given", s.footprintGiven}};
+        OrderedJson dropped = OrderedJson::array();
+        for (int d : plan.dropped)
+            dropped.push_back({brief.adjacencies[d].a, brief.adjacencies[d].b});
+        j["dropped"] = dropped;
+        j["unmetFacade"] = idsOf(plan.unmetFacade);
+        j["spareSpaces"] = plan.extended.roomCount > 0 ? plan.extended.spareCount() : 0;
+        OrderedJson diags = OrderedJson::array();
+        for (const Diagnostic& d : plan.diagnostics) {
+            OrderedJson adjs = OrderedJson::array();
+            for (int a : d.adjacencies)
+                adjs.push_back({brief.adjacencies[a].a, brief.adjacencies[a].b});
+            diags.push_back({{"severity", toString(d.severity)}, {"code", d.code},
+                             {"message", d.message}, {"rooms", idsOf(d.rooms)},
+                             {"adjacencies", adjs}});
+        }
+        j["diagnostics"] = diags;
         out << j.dump(2) << "\n";
-        return exitOk;
+        return code;
     }
     out << path << "\n";
     out << "  rooms:        " << s.rooms << " (" << s.facadeWishes << " with facade wishes)\n";
@@ -88,7 +117,17 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     if (s.footprintArea > 0)
         out << "  spare area:   " << fixed(s.footprintArea - s.targetArea) << " " << u << "² ("
             << fixed(100.0 * (s.footprintArea - s.targetArea) / s.footprintArea) << "%)\n";
-    return exitOk;
+    out << "\n" << plan.summary << "\n";
+    for (const Diagnostic& d : plan.diagnostics) {
+        if (d.severity == Severity::Info && d.code == "added-contact") continue;
+        out << "  " << toString(d.severity) << ": " << d.message << "\n";
+    }
+    int added = 0;
+    for (const Diagnostic& d : plan.diagnostics) added += d.code == "added-contact";
+    if (added > 0)
+        out << "  info: " << added << " wall(s) the brief did not ask for are added to close the plan"
+            << " (use --json for the list).\n";
+    return code;
 }
 
 } // namespace abut::cli

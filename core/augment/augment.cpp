@@ -1,0 +1,640 @@
+#include "augment/augment.h"
+
+#include "augment/connect.h"
+#include "augment/separating_triangles.h"
+#include "augment/triangulate.h"
+#include "embed/planar_embedding.h"
+
+#include <algorithm>
+#include <cmath>
+#include <map>
+#include <set>
+
+namespace abut {
+
+const char* toString(AugmentStatus s) {
+    switch (s) {
+    case AugmentStatus::Feasible: return "feasible";
+    case AugmentStatus::Compromised: return "compromised";
+    case AugmentStatus::Empty: return "empty";
+    case AugmentStatus::Internal: return "internal-error";
+    }
+    return "?";
+}
+
+const char* toString(Severity s) {
+    switch (s) {
+    case Severity::Info: return "info";
+    case Severity::Warning: return "warning";
+    case Severity::Error: return "error";
+    }
+    return "?";
+}
+
+namespace {
+
+using Edge = std::pair<int, int>;
+Edge ordered(int a, int b) { return a < b ? Edge{a, b} : Edge{b, a}; }
+
+// Cost of giving up a contact: a brief's must outweighs any number of
+// shoulds in practice, a door outweighs a wall of the same priority, and a
+// contact Abut added itself costs next to nothing.
+double adjacencyCost(const Adjacency& a) {
+    return (a.priority == Priority::Must ? 10000.0 : 100.0) +
+           (a.kind == AdjacencyKind::Door ? 10.0 : 0.0);
+}
+constexpr double addedContactCost = 1.0;
+
+class Builder {
+public:
+    Builder(const Brief& brief, const AugmentOptions& options) : brief_(brief), options_(options) {
+        n_ = static_cast<int>(brief.rooms.size());
+        for (std::size_t i = 0; i < brief.adjacencies.size(); ++i) {
+            const Edge e = ordered(brief.roomIndex(brief.adjacencies[i].a),
+                                   brief.roomIndex(brief.adjacencies[i].b));
+            briefEdge_[e] = static_cast<int>(i);
+        }
+        for (const Room& r : brief.rooms) {
+            ids_.push_back(r.id);
+            wishes_.push_back(r.facade);
+        }
+    }
+
+    AugmentResult run();
+
+private:
+    std::string name(int room) const { return brief_.rooms[room].displayName(); }
+    std::string describe(int adj) const {
+        const Adjacency& a = brief_.adjacencies[adj];
+        return name(brief_.roomIndex(a.a)) + "–" + name(brief_.roomIndex(a.b)) + " (" +
+               toString(a.kind) + ", " + toString(a.priority) + ")";
+    }
+    double cost(int u, int v) const {
+        const auto it = briefEdge_.find(ordered(u, v));
+        return it == briefEdge_.end() ? addedContactCost : adjacencyCost(brief_.adjacencies[it->second]);
+    }
+    int adjacencyIndex(int u, int v) const {
+        const auto it = briefEdge_.find(ordered(u, v));
+        return it == briefEdge_.end() ? -1 : it->second;
+    }
+    void note(Severity sev, std::string code, std::string message, std::vector<int> rooms,
+              std::vector<int> adjacencies = {}) {
+        std::sort(rooms.begin(), rooms.end());
+        rooms.erase(std::unique(rooms.begin(), rooms.end()), rooms.end());
+        result_.diagnostics.push_back(
+            {sev, std::move(code), std::move(message), std::move(rooms), std::move(adjacencies)});
+    }
+    std::string roomList(std::vector<int> rooms) const {
+        std::string s;
+        for (std::size_t i = 0; i < rooms.size(); ++i) {
+            if (i) s += (i + 1 == rooms.size()) ? " and " : ", ";
+            s += name(rooms[i]);
+        }
+        return s;
+    }
+
+    PlaneGraph embedDroppingCrossings();
+    void reportAddedContacts(const std::vector<Edge>& added, const char* why);
+    std::vector<int> chooseOuterFace(const PlaneGraph& g) const;
+    void bringWishingPendantsOut(PlaneGraph& g) const;
+    bool shrinkOutlineToWishes(PlaneGraph& g, const std::vector<int>& outer);
+    bool breakSeparatingTriangles(PlaneGraph& g, const std::vector<int>& outer);
+    void rankCorners(OuterFrame& frame) const;
+    CornerSearch relaxFacadeWishes(const PlaneGraph& g, const std::vector<int>& outer);
+    bool smallBrief();
+    void finish();
+
+    const Brief& brief_;
+    AugmentOptions options_;
+    int n_ = 0;
+    std::map<Edge, int> briefEdge_;
+    std::vector<std::string> ids_;
+    std::vector<FacadeWish> wishes_;
+    std::vector<std::optional<SketchPoint>> sketch_;
+    AugmentResult result_;
+};
+
+PlaneGraph Builder::embedDroppingCrossings() {
+    std::vector<Edge> edges;
+    std::vector<int> edgeAdj;
+    for (std::size_t i = 0; i < brief_.adjacencies.size(); ++i) {
+        edges.push_back(ordered(brief_.roomIndex(brief_.adjacencies[i].a),
+                                brief_.roomIndex(brief_.adjacencies[i].b)));
+        edgeAdj.push_back(static_cast<int>(i));
+    }
+    for (const Room& r : brief_.rooms) {
+        const SketchPoint* p = brief_.sketchPosition(r.id);
+        sketch_.push_back(p ? std::optional<SketchPoint>(*p) : std::nullopt);
+    }
+    bool firstWitness = true;
+    for (;;) {
+        EmbeddingResult e = embedPlanar(n_, edges, sketch_);
+        if (e.status == EmbeddingStatus::Planar) {
+            result_.embeddingFromSketch = e.fromSketch;
+            return std::move(e.graph);
+        }
+        // Name the conflict, then give up its cheapest adjacency and retry.
+        std::vector<int> rooms, adjs;
+        std::map<int, int> degree;
+        int cheapest = e.witnessEdges.front();
+        for (int we : e.witnessEdges) {
+            adjs.push_back(edgeAdj[we]);
+            rooms.push_back(edges[we].first);
+            rooms.push_back(edges[we].second);
+            ++degree[edges[we].first];
+            ++degree[edges[we].second];
+            if (cost(edges[we].first, edges[we].second) < cost(edges[cheapest].first, edges[cheapest].second))
+                cheapest = we;
+        }
+        if (firstWitness) {
+            int deg4 = 0;
+            for (const auto& [v, d] : degree) deg4 += d == 4;
+            std::string list;
+            for (std::size_t i = 0; i < adjs.size(); ++i) list += (i ? "; " : "") + describe(adjs[i]);
+            note(Severity::Error, "non-planar",
+                 "These adjacencies cannot all be drawn on one floor without two of them crossing "
+                 "(they contain the pattern of " + std::string(deg4 >= 5 ? "five rooms all touching each other, K5" :
+                 "two groups of three rooms each touching all of the other group, K3,3") + "): " + list + ".",
+                 rooms, adjs);
+            firstWitness = false;
+        }
+        const int drop = edgeAdj[cheapest];
+        note(Severity::Warning, "dropped-adjacency",
+             "Dropped " + describe(drop) + " so that the rest can be drawn without crossings.",
+             {edges[cheapest].first, edges[cheapest].second}, {drop});
+        edges.erase(edges.begin() + cheapest);
+        edgeAdj.erase(edgeAdj.begin() + cheapest);
+    }
+}
+
+void Builder::reportAddedContacts(const std::vector<Edge>& added, const char* why) {
+    for (const auto& [u, v] : added)
+        note(Severity::Info, "added-contact",
+             name(u) + " and " + name(v) + " share a wall the brief did not ask for (" + why + ").",
+             {u, v});
+}
+
+std::vector<int> Builder::chooseOuterFace(const PlaneGraph& g) const {
+    std::vector<int> best;
+    double bestScore = -1e300;
+    for (const std::vector<int>& f : g.faces()) {
+        double score = 0.01 * static_cast<double>(f.size());
+        std::set<int> on(f.begin(), f.end());
+        for (int v = 0; v < n_; ++v)
+            if (!wishes_[v].empty() && on.count(v)) score += 10.0;
+        if (f.size() == 3 && n_ > 3) score -= 5.0; // would enclose everything else
+        if (result_.embeddingFromSketch) {
+            // The sketch's own outline is traced clockwise: negative area.
+            double area = 0.0;
+            for (std::size_t i = 0; i < f.size(); ++i) {
+                const SketchPoint& a = *sketch_[f[i]];
+                const SketchPoint& b = *sketch_[f[(i + 1) % f.size()]];
+                area += a.x * b.y - b.x * a.y;
+            }
+            if (area < 0) score += 3.0;
+        }
+        if (score > bestScore) {
+            bestScore = score;
+            best = f;
+        }
+    }
+    return best;
+}
+
+bool Builder::breakSeparatingTriangles(PlaneGraph& g, const std::vector<int>& outer) {
+    const std::vector<Triangle> sep = separatingTriangles(g, outer);
+    if (sep.empty()) return false;
+    const Cover cover = cheapestCover(sep, [this](int u, int v) { return cost(u, v); });
+    for (const auto& [u, v] : cover.edges) {
+        // Explain with one triangle this edge breaks, and what it encloses.
+        const Triangle* t = nullptr;
+        for (const Triangle& tr : sep)
+            if (std::count(tr.begin(), tr.end(), u) && std::count(tr.begin(), tr.end(), v)) t = &tr;
+        // A fourth room touching all three is the classic case: four rooms that
+        // must all touch each other.
+        int fourth = -1;
+        for (int x = 0; x < n_ && fourth < 0; ++x)
+            if (std::none_of(t->begin(), t->end(), [x](int y) { return x == y; }) &&
+                std::all_of(t->begin(), t->end(), [&](int y) { return g.hasEdge(x, y); }))
+                fourth = x;
+        const int adj = adjacencyIndex(u, v);
+        g.removeEdge(u, v);
+        if (adj < 0) continue; // an added contact: nothing of the brief is lost
+        std::vector<int> rooms{(*t)[0], (*t)[1], (*t)[2]};
+        std::string why;
+        if (fourth >= 0) {
+            rooms.push_back(fourth);
+            why = roomList(rooms) + " must all touch each other. Four rectangles cannot all share "
+                  "walls pairwise: one of them would be boxed in by the other three";
+        } else {
+            why = roomList({(*t)[0], (*t)[1], (*t)[2]}) +
+                  " all touch each other around other rooms; rectangles cannot enclose rooms that "
+                  "way (a separating triangle)";
+        }
+        note(Severity::Warning, "dropped-adjacency",
+             why + ". Dropped " + describe(adj) + "; to keep it, let one of these pairs meet through "
+                   "another room or make it 'should'.",
+             rooms, {adj});
+    }
+    return true;
+}
+
+// A room hanging on a single neighbour can sit in any angle at that
+// neighbour; when it wishes a facade, put it on the outline.
+void Builder::bringWishingPendantsOut(PlaneGraph& g) const {
+    const std::vector<int> outer = chooseOuterFace(g);
+    const int k = static_cast<int>(outer.size());
+    for (int v = 0; v < n_; ++v) {
+        if (wishes_[v].empty() || g.degree(v) != 1) continue;
+        if (std::count(outer.begin(), outer.end(), v)) continue;
+        const int c = g.neighbours(v)[0];
+        for (int i = 0; i < k; ++i) {
+            if (outer[i] != c || outer[(i + 1) % k] == v || outer[(i + k - 1) % k] == v) continue;
+            const int after = outer[(i + 1) % k];
+            g.removeEdge(c, v);
+            g.insertEdge(c, v, after, -1);
+            break;
+        }
+    }
+}
+
+// Cuts rooms without a facade wish off the outline: a contact between two
+// consecutive wishing rooms of the outer cycle, drawn outside, puts the rooms
+// between them inside. Returns whether anything changed.
+bool Builder::shrinkOutlineToWishes(PlaneGraph& g, const std::vector<int>& outer) {
+    std::vector<int> walk = outer; // kept up to date as chords go in
+    auto isWishing = [&](int v) { return v < n_ && !wishes_[v].empty(); };
+    if (std::count_if(walk.begin(), walk.end(), isWishing) < 3) return false;
+    std::vector<Edge> added;
+    // First cut single rooms without wishes off the outline where their two
+    // outline neighbours may touch (an ear), rooms with most chords first.
+    for (bool cut = true; cut && walk.size() > 4;) {
+        cut = false;
+        const int k = static_cast<int>(walk.size());
+        int best = -1, bestChords = -1;
+        for (int i = 0; i < k; ++i) {
+            const int x = walk[i], a = walk[(i + k - 1) % k], b = walk[(i + 1) % k];
+            if (isWishing(x) || a == b || std::count(walk.begin(), walk.end(), x) > 1) continue;
+            if (g.hasEdge(a, b)) continue;
+            const std::vector<int> common = g.commonNeighbours(a, b);
+            if (common.size() != 1 || common[0] != x) continue;
+            int chords = 0;
+            for (int w : g.neighbours(x)) chords += std::count(walk.begin(), walk.end(), w) > 0;
+            if (chords > bestChords) {
+                bestChords = chords;
+                best = i;
+            }
+        }
+        if (best >= 0 && bestChords > 2) {
+            const int a = walk[(best + k - 1) % k], b = walk[(best + 1) % k];
+            g.insertEdge(a, b, walk[best], walk[(best + 2) % k]);
+            added.emplace_back(a, b);
+            walk.erase(walk.begin() + best);
+            cut = true;
+        }
+    }
+    for (std::size_t guard = 0; guard < outer.size(); ++guard) {
+        const int k = static_cast<int>(walk.size());
+        bool changed = false;
+        for (int p = 0; p < k && !changed; ++p) {
+            if (!isWishing(walk[p])) continue;
+            int q = (p + 1) % k;
+            while (!isWishing(walk[q])) q = (q + 1) % k;
+            const int gap = (q - p + k) % k;
+            if (gap < 2) continue;
+            const int a = walk[p], b = walk[q];
+            if (a == b || g.hasEdge(a, b)) continue;
+            const std::vector<int> common = g.commonNeighbours(a, b);
+            if (!(common.empty() || (gap == 2 && common.size() == 1 && common[0] == walk[(p + 1) % k])))
+                continue;
+            g.insertEdge(a, b, walk[(p + 1) % k], walk[(q + 1) % k]);
+            added.emplace_back(a, b);
+            // The outline now runs b → ... → a; the rooms between a and b are inside.
+            std::vector<int> next;
+            for (int i = q;; i = (i + 1) % k) {
+                next.push_back(walk[i]);
+                if (i == p) break;
+            }
+            walk = std::move(next);
+            changed = true;
+        }
+        if (!changed || walk.size() <= 3) break;
+    }
+    reportAddedContacts(added, "so that the rooms with facade wishes form the outline");
+    return !added.empty();
+}
+
+// No corner assignment meets every side wish: give up as few as possible —
+// one room's sides, then two rooms', then all — and say which.
+CornerSearch Builder::relaxFacadeWishes(const PlaneGraph& g, const std::vector<int>& outer) {
+    std::vector<int> sided;
+    for (int v = 0; v < n_; ++v)
+        if (wishes_[v].sides) sided.push_back(v);
+    auto without = [&](std::vector<int> ignored) {
+        std::vector<FacadeWish> w = wishes_;
+        for (int v : ignored) w[v].sides = 0;
+        return cornerAssignments(g, outer, w, options_.cornerLimit);
+    };
+    const int m = static_cast<int>(sided.size());
+    std::vector<std::vector<int>> tries;
+    for (int i = 0; i < m; ++i) tries.push_back({sided[i]});
+    if (m <= 16)
+        for (int i = 0; i < m; ++i)
+            for (int j = i + 1; j < m; ++j) tries.push_back({sided[i], sided[j]});
+    tries.push_back(sided);
+    for (const std::vector<int>& ignored : tries) {
+        CornerSearch s = without(ignored);
+        if (s.assignments.empty()) continue;
+        note(Severity::Warning, "facade-conflict",
+             "The facade sides asked for " + roomList(sided) +
+                 " cannot all be met at once; the plan gives up the sides of " + roomList(ignored) + ".",
+             ignored);
+        return s;
+    }
+    return {};
+}
+
+void Builder::rankCorners(OuterFrame& frame) const {
+    // Prefer sides whose room counts follow the footprint's proportions and,
+    // with a sketch, rooms on the side they were drawn towards.
+    const Footprint fp = brief_.effectiveFootprint();
+    const double k = static_cast<double>(frame.cycle.size());
+    const double along[4] = {fp.width, fp.depth, fp.width, fp.depth};
+    const double perimeter = 2.0 * (fp.width + fp.depth);
+    double cx = 0, cy = 0;
+    const bool useSketch = result_.embeddingFromSketch;
+    if (useSketch) {
+        for (int v : frame.cycle) {
+            cx += sketch_[v]->x;
+            cy += sketch_[v]->y;
+        }
+        cx /= k;
+        cy /= k;
+    }
+    const double normal[4][2] = {{0, 1}, {1, 0}, {0, -1}, {-1, 0}};
+    std::vector<std::pair<double, std::size_t>> scored;
+    for (std::size_t i = 0; i < frame.corners.size(); ++i) {
+        const auto sides = sidesOf(frame.cycle, frame.corners[i]);
+        double penalty = 0.0;
+        for (int s = 0; s < 4; ++s) {
+            const double target = std::max(1.0, (k + 4.0) * along[s] / perimeter);
+            const double d = static_cast<double>(sides[s].size()) - target;
+            penalty += d * d;
+            if (useSketch)
+                for (int v : sides[s]) {
+                    const double dx = sketch_[v]->x - cx, dy = sketch_[v]->y - cy;
+                    const double len = std::hypot(dx, dy);
+                    if (len > 0) penalty -= 2.0 * (dx * normal[s][0] + dy * normal[s][1]) / len;
+                }
+        }
+        scored.emplace_back(penalty, i);
+    }
+    std::stable_sort(scored.begin(), scored.end());
+    std::vector<CornerAssignment> ranked;
+    for (const auto& [p, i] : scored) ranked.push_back(frame.corners[i]);
+    frame.corners = std::move(ranked);
+}
+
+// One or two rooms: the extended graph is written out directly.
+bool Builder::smallBrief() {
+    if (n_ > 2) return false;
+    ExtendedGraph& x = result_.extended;
+    x.roomCount = n_;
+    x.names = ids_;
+    for (const char* p : {"N", "E", "S", "W"}) x.names.push_back(p);
+    const int N = n_, E = n_ + 1, S = n_ + 2, W = n_ + 3;
+    PlaneGraph g(n_ + 4);
+    if (n_ == 1) {
+        g.setRotation(0, {E, N, W, S});
+        g.setRotation(N, {W, 0, E});
+        g.setRotation(E, {N, 0, S});
+        g.setRotation(S, {E, 0, W});
+        g.setRotation(W, {S, 0, N});
+    } else {
+        if (briefEdge_.empty()) reportAddedContacts({{0, 1}}, "a plan of two rooms always joins them");
+        // Four arrangements: 0 west of 1, 1 west of 0, 0 north of 1, 1 north of 0.
+        // Sides reached: west-of: the west room N,S,W and the east room N,E,S.
+        auto reaches = [](int arrangement, int room) {
+            const bool first = (arrangement % 2 == 0) == (room == 0);
+            FacadeWish w;
+            if (arrangement < 2) {
+                for (Side s : {Side::N, Side::S}) w.add(s);
+                w.add(first ? Side::W : Side::E);
+            } else {
+                for (Side s : {Side::E, Side::W}) w.add(s);
+                w.add(first ? Side::N : Side::S);
+            }
+            return w;
+        };
+        int arrangement = 0;
+        for (int a = 3; a >= 0; --a) {
+            bool ok = true;
+            for (int r = 0; r < 2; ++r) ok = ok && (wishes_[r].sides & ~reaches(a, r).sides) == 0;
+            if (ok) arrangement = a;
+        }
+        for (int r = 0; r < 2; ++r)
+            if ((wishes_[r].sides & ~reaches(arrangement, r).sides) != 0) result_.unmetFacade.push_back(r);
+        const int x0 = arrangement % 2 == 0 ? 0 : 1, y0 = 1 - x0; // x0 west/north of y0
+        if (arrangement < 2) {
+            g.setRotation(x0, {y0, N, W, S});
+            g.setRotation(y0, {E, N, x0, S});
+            g.setRotation(N, {W, x0, y0, E});
+            g.setRotation(E, {N, y0, S});
+            g.setRotation(S, {E, y0, x0, W});
+            g.setRotation(W, {S, x0, N});
+        } else {
+            g.setRotation(x0, {E, N, W, y0});
+            g.setRotation(y0, {E, x0, W, S});
+            g.setRotation(N, {W, x0, E});
+            g.setRotation(E, {N, x0, y0, S});
+            g.setRotation(S, {E, y0, W});
+            g.setRotation(W, {S, y0, x0, N});
+        }
+    }
+    g.rebuildEdgeSet();
+    x.graph = std::move(g);
+    return true;
+}
+
+AugmentResult Builder::run() {
+    if (n_ == 0) {
+        result_.status = AugmentStatus::Empty;
+        result_.summary = "The brief has no rooms yet.";
+        return result_;
+    }
+    PlaneGraph g = embedDroppingCrossings();
+    if (smallBrief()) {
+        finish();
+        return result_;
+    }
+    const auto [comp, groups] = components(g);
+    if (groups > 1) {
+        const auto joined = joinComponents(g, result_.embeddingFromSketch ? sketch_
+                                                 : std::vector<std::optional<SketchPoint>>{});
+        reportAddedContacts(joined, "the brief has separate groups of rooms, and a plan is one piece");
+    }
+    // Shape the outline before cut vertices are closed: fewer contacts stand
+    // in the way of the ones that put wishing rooms on the outline.
+    bringWishingPendantsOut(g);
+    shrinkOutlineToWishes(g, chooseOuterFace(g));
+    std::vector<int> outer;
+    bool shrunk = false;
+    for (int round = 0;; ++round) {
+        reportAddedContacts(makeBiconnected(g), "so that no single room links two parts of the plan");
+        outer = chooseOuterFace(g);
+        if (breakSeparatingTriangles(g, outer)) continue;
+        // Corners: with the wishes; else with fewer rooms on the outline;
+        // else without the side wishes (reported).
+        CornerSearch search = cornerAssignments(g, outer, wishes_, options_.cornerLimit);
+        if (search.assignments.empty() && !shrunk) {
+            shrunk = true;
+            if (shrinkOutlineToWishes(g, outer)) continue;
+        }
+        if (search.assignments.empty()) search = relaxFacadeWishes(g, outer);
+        if (search.assignments.empty()) {
+            // Too many rooms cut off parts of the outline: give up the
+            // cheapest chord of the outer cycle and try again.
+            std::set<int> on(outer.begin(), outer.end());
+            Edge chord{-1, -1};
+            const int k = static_cast<int>(outer.size());
+            for (int i = 0; i < k; ++i)
+                for (int w : g.neighbours(outer[i])) {
+                    const auto it = std::find(outer.begin(), outer.end(), w);
+                    if (it == outer.end()) continue;
+                    const int d = (static_cast<int>(it - outer.begin()) - i + k) % k;
+                    if (d == 1 || d == k - 1) continue;
+                    if (chord.first < 0 || cost(outer[i], w) < cost(chord.first, chord.second))
+                        chord = ordered(outer[i], w);
+                }
+            const int adj = adjacencyIndex(chord.first, chord.second);
+            g.removeEdge(chord.first, chord.second);
+            if (adj >= 0)
+                note(Severity::Warning, "dropped-adjacency",
+                     "Dropped " + describe(adj) + ": with it, the rooms on the outline could not be "
+                     "split into four facade sides.",
+                     {chord.first, chord.second}, {adj});
+            continue;
+        }
+        result_.frame.graph = g;
+        result_.frame.cycle = outer;
+        result_.frame.corners = std::move(search.assignments);
+        result_.frame.cornersTruncated = search.truncated;
+        break;
+    }
+    rankCorners(result_.frame);
+    const int choice = std::clamp(options_.cornerChoice, 0,
+                                  static_cast<int>(result_.frame.corners.size()) - 1);
+    const CornerAssignment& corners = result_.frame.corners[choice];
+    // Facade wishes met?
+    const auto sides = sidesOf(result_.frame.cycle, corners);
+    for (int v = 0; v < n_; ++v) {
+        if (wishes_[v].empty()) continue;
+        bool met = true;
+        for (Side s : allSides)
+            if (wishes_[v].has(s))
+                met = met && std::count(sides[static_cast<int>(s)].begin(), sides[static_cast<int>(s)].end(), v);
+        if (wishes_[v].anySide)
+            met = met && std::count(result_.frame.cycle.begin(), result_.frame.cycle.end(), v);
+        if (!met) result_.unmetFacade.push_back(v);
+    }
+    TriangulationReport report;
+    result_.extended = extendFrame(result_.frame, ids_, corners, &report);
+    reportAddedContacts(report.addedEdges, "to complete the plan");
+    if (!report.spares.empty())
+        note(Severity::Info, "spare-space",
+             "The plan needs " + std::to_string(report.spares.size()) +
+                 " spare space(s): gaps where no further wall between rooms could be added.",
+             {});
+    finish();
+    return result_;
+}
+
+void Builder::finish() {
+    ExtendedGraph& x = result_.extended;
+    for (std::size_t i = 0; i < brief_.adjacencies.size(); ++i) {
+        const int a = brief_.roomIndex(brief_.adjacencies[i].a), b = brief_.roomIndex(brief_.adjacencies[i].b);
+        if (!x.graph.hasEdge(a, b)) result_.dropped.push_back(static_cast<int>(i));
+    }
+    for (int v : result_.unmetFacade) {
+        std::string sides;
+        for (Side s : allSides)
+            if (wishes_[v].has(s)) sides += sides.empty() ? std::string(1, sideLetter(s)) : std::string(", ") + sideLetter(s);
+        note(Severity::Warning, "facade-unmet",
+             name(v) + " does not reach " + (sides.empty() ? std::string("an outside wall") : "the " + sides + " facade") +
+                 " in this plan.",
+             {v});
+    }
+    bool mustLost = false;
+    for (int d : result_.dropped) mustLost = mustLost || brief_.adjacencies[d].priority == Priority::Must;
+    result_.status = (mustLost || !result_.unmetFacade.empty()) ? AugmentStatus::Compromised
+                                                                : AugmentStatus::Feasible;
+    const GraphCheck check = checkExtendedGraph(x, brief_, result_.dropped);
+    if (!check.ok) {
+        result_.status = AugmentStatus::Internal;
+        result_.summary = "Internal error: the extended graph failed its check (" + check.problem +
+                          "). Please report this brief.";
+        return;
+    }
+    if (result_.status == AugmentStatus::Feasible) {
+        result_.summary = result_.dropped.empty()
+                              ? "A rectangular plan exists with every adjacency and facade wish."
+                              : "A rectangular plan exists with every 'must' adjacency and facade wish; " +
+                                    std::to_string(result_.dropped.size()) + " 'should' adjacency(ies) dropped.";
+    } else {
+        int musts = 0;
+        for (int d : result_.dropped) musts += brief_.adjacencies[d].priority == Priority::Must;
+        result_.summary = "No rectangular plan keeps the whole brief: " + std::to_string(musts) +
+                          " 'must' adjacency(ies) dropped, " + std::to_string(result_.unmetFacade.size()) +
+                          " facade wish(es) unmet.";
+    }
+}
+
+} // namespace
+
+ExtendedGraph extendFrame(const OuterFrame& frame, const std::vector<std::string>& roomIds,
+                          const CornerAssignment& corners, TriangulationReport* report) {
+    ExtendedGraph x;
+    x.roomCount = static_cast<int>(roomIds.size());
+    x.graph = frame.graph;
+    PlaneGraph& g = x.graph;
+    const int R = x.roomCount;
+    const auto sides = sidesOf(frame.cycle, corners);
+    for (int s = 0; s < 4; ++s) {
+        std::vector<int> rot{R + (s + 3) % 4};
+        rot.insert(rot.end(), sides[s].begin(), sides[s].end());
+        rot.push_back(R + (s + 1) % 4);
+        g.addVertexWithRotation(std::move(rot));
+    }
+    const int k = static_cast<int>(frame.cycle.size());
+    for (int i = 0; i < k; ++i) {
+        // Sides holding position i, in walk order (the first is the one that
+        // does not also hold the position before it... i.e. does not start here).
+        bool on[4];
+        for (int s = 0; s < 4; ++s) {
+            const int from = corners.corner[s];
+            const int to = s < 3 ? corners.corner[s + 1] : corners.corner[0] + k;
+            on[s] = ((i - from) % k + k) % k <= to - from;
+        }
+        int first = 0;
+        for (int s = 0; s < 4; ++s)
+            if (on[s] && !on[(s + 3) % 4]) first = s;
+        std::vector<int> poles;
+        for (int t = 0; t < 4; ++t)
+            if (on[(first + t) % 4]) poles.insert(poles.begin(), R + (first + t) % 4);
+            else break;
+        g.spliceRotation(frame.cycle[i], frame.cycle[(i + 1) % k], poles);
+    }
+    TriangulationReport local;
+    TriangulationReport& rep = report ? *report : local;
+    rep = triangulateInnerFaces(g, R + 0, R + 1);
+    x.names = roomIds;
+    for (const char* p : {"N", "E", "S", "W"}) x.names.push_back(p);
+    for (int i = 0; i < x.spareCount(); ++i) x.names.push_back("spare" + std::to_string(i + 1));
+    return x;
+}
+
+AugmentResult buildExtendedGraph(const Brief& brief, const AugmentOptions& options) {
+    return Builder(brief, options).run();
+}
+
+} // namespace abut

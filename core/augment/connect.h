@@ -1,0 +1,34 @@
+// Joining a brief's separate groups of rooms, and removing cut vertices, by
+// added contacts (extra walls, harmless to the brief). Both keep the graph
+// plane and create no separating triangle: a join edge links two groups, so
+// it lies on no triangle; an edge a–b added in the angle a–c–b at a cut vertex
+// c has c as the only common neighbour, and a–c–b becomes a face.
+//
+// Precondition: `g` is a plane graph. Running time: joinComponents O(n + m)
+// (O(n·k) with sketch positions for k groups); makeBiconnected O(n·(n + m)) in
+// the worst case, one face pass per added edge.
+#pragma once
+
+#include "brief/brief.h"
+#include "graph/plane_graph.h"
+
+#include <optional>
+#include <utility>
+#include <vector>
+
+namespace abut {
+
+// Connects the components; returns the edges added. With sketch positions the
+// nearest pair of rooms is joined, otherwise a room on the largest face of the
+// first component.
+std::vector<std::pair<int, int>> joinComponents(PlaneGraph& g,
+                                                const std::vector<std::optional<SketchPoint>>& sketch);
+
+// Adds edges until every face is a simple cycle (the graph is 2-connected).
+// Precondition: connected, at least 3 vertices.
+std::vector<std::pair<int, int>> makeBiconnected(PlaneGraph& g);
+
+// Component number of every vertex, and their count.
+std::pair<std::vector<int>, int> components(const PlaneGraph& g);
+
+} // namespace abut

@@ -1,0 +1,43 @@
+// Planarity test and combinatorial embedding of the rooms' adjacency graph.
+//
+// Method: Boyer & Myrvold, "On the cutting edge: simplified O(n) planarity by
+// edge addition", J. Graph Algorithms Appl. 8(3), 2004, as implemented by
+// Boost.Graph's boyer_myrvold_planarity_test. When every room has a sketch
+// position and the straight-line sketch has no crossing, the sketch itself is
+// kept as the embedding: it is the planner's intent.
+//
+// Precondition: edges are simple (no loops, no duplicates), endpoints < n.
+// Running time: O(n + m) for the test; the crossing check of the sketch is
+// O(m²) and only done for m <= sketchCrossingLimit.
+#pragma once
+
+#include "brief/brief.h"
+#include "graph/plane_graph.h"
+
+#include <optional>
+#include <string>
+#include <utility>
+#include <vector>
+
+namespace abut {
+
+enum class EmbeddingStatus { Planar, NonPlanar };
+
+struct EmbeddingResult {
+    EmbeddingStatus status = EmbeddingStatus::Planar;
+    PlaneGraph graph;     // the embedding, when Planar
+    bool fromSketch = false;
+    std::vector<int> witnessEdges; // NonPlanar: indices into the input edges of a Kuratowski subgraph
+};
+
+constexpr int sketchCrossingLimit = 4000;
+
+EmbeddingResult embedPlanar(int n, const std::vector<std::pair<int, int>>& edges,
+                            const std::vector<std::optional<SketchPoint>>& sketch = {});
+
+// Pairs of input edges whose straight segments cross in the sketch (edges
+// sharing an endpoint never count). O(m²).
+std::vector<std::pair<int, int>> sketchCrossings(const std::vector<std::pair<int, int>>& edges,
+                                                 const std::vector<std::optional<SketchPoint>>& sketch);
+
+} // namespace abut
