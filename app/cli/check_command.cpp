@@ -41,23 +41,14 @@ BriefSummary summarize(const Brief& brief) {
 } // namespace
 
 int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostream& err) {
-    std::string path;
-    bool json = false;
-    for (const std::string& a : args) {
-        if (a == "--json") json = true;
-        else if (!a.empty() && a[0] == '-') {
-            err << "abut-cli check: unknown option \"" << a << "\"\n";
-            return exitBadInput;
-        } else if (path.empty()) path = a;
-        else {
-            err << "abut-cli check: more than one project given\n";
-            return exitBadInput;
-        }
-    }
-    if (path.empty()) {
+    const ParsedArgs a = parseArgs(args, {}, {"--json"}, err, "check PROJECT [--json]");
+    if (!a.ok) return exitBadInput;
+    if (a.positional.size() != 1) {
         err << "usage: abut-cli check PROJECT [--json]\n";
         return exitBadInput;
     }
+    const std::string& path = a.positional[0];
+    const bool json = a.flags.count("--json") > 0;
     const LoadResult loaded = loadProject(path);
     if (!loaded.ok()) {
         for (const FileError& e : loaded.errors) err << e.toString() << "\n";
@@ -66,9 +57,11 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     const Brief& brief = loaded.brief;
     const BriefSummary s = summarize(brief);
     const AugmentResult plan = buildExtendedGraph(brief);
-    const int code = plan.status == AugmentStatus::Feasible ? exitOk
-                     : plan.status == AugmentStatus::Empty  ? exitOk
-                                                            : exitNoPlan;
+    if (plan.status == AugmentStatus::Internal) {
+        err << path << ": " << plan.summary << "\n";
+        return exitInternal;
+    }
+    const int code = plan.status == AugmentStatus::Compromised ? exitNoPlan : exitOk;
     const std::string u = brief.units;
     auto idsOf = [&](const std::vector<int>& rooms) {
         std::vector<std::string> ids;

@@ -1,6 +1,8 @@
 #pragma once
 
+#include <map>
 #include <ostream>
+#include <set>
 #include <string>
 #include <vector>
 
@@ -9,7 +11,24 @@ namespace abut::cli {
 constexpr int exitOk = 0;
 constexpr int exitBadInput = 2;
 constexpr int exitNoPlan = 3;
+constexpr int exitInternal = 4; // a result failed its own checker: a bug, never silent
+
+struct ParsedArgs {
+    bool ok = true;
+    std::vector<std::string> positional;
+    std::map<std::string, std::string> values; // options that take a value
+    std::set<std::string> flags;               // options without one
+};
+
+// Options in `withValue` take the next argument; those in `flags` stand
+// alone; anything else starting with '-' is an error naming the command.
+ParsedArgs parseArgs(const std::vector<std::string>& args, const std::set<std::string>& withValue,
+                     const std::set<std::string>& flags, std::ostream& err, const std::string& usage);
+
+// False (with a message) when `target` is the same file as `input`.
+bool refuseToOverwriteInput(const std::string& input, const std::string& target, std::ostream& err);
 
 int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
+int runExtended(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
 
 } // namespace abut::cli

@@ -400,8 +400,6 @@ bool Builder::smallBrief() {
     if (n_ > 2) return false;
     ExtendedGraph& x = result_.extended;
     x.roomCount = n_;
-    x.names = ids_;
-    for (const char* p : {"N", "E", "S", "W"}) x.names.push_back(p);
     const int N = n_, E = n_ + 1, S = n_ + 2, W = n_ + 3;
     PlaneGraph g(n_ + 4);
     if (n_ == 1) {
@@ -453,6 +451,7 @@ bool Builder::smallBrief() {
     }
     g.rebuildEdgeSet();
     x.graph = std::move(g);
+    nameVertices(x, ids_);
     return true;
 }
 
@@ -627,9 +626,7 @@ ExtendedGraph extendFrame(const OuterFrame& frame, const std::vector<std::string
     TriangulationReport local;
     TriangulationReport& rep = report ? *report : local;
     rep = triangulateInnerFaces(g, R + 0, R + 1);
-    x.names = roomIds;
-    for (const char* p : {"N", "E", "S", "W"}) x.names.push_back(p);
-    for (int i = 0; i < x.spareCount(); ++i) x.names.push_back("spare" + std::to_string(i + 1));
+    nameVertices(x, roomIds);
     return x;
 }
 

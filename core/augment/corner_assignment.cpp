@@ -23,9 +23,10 @@ CornerSearch cornerAssignments(const PlaneGraph& g, const std::vector<int>& cycl
     std::vector<int> pos(g.vertexCount(), -1);
     for (int i = 0; i < k; ++i) pos[cycle[i]] = i;
 
-    // reach[i]: the longest span s (< k) such that positions i..i+s hold no
-    // two rooms joined by a chord of the cycle.
-    std::vector<int> reach(k, k - 1);
+    // reach[i]: the longest span s such that positions i..i+s hold no two
+    // rooms joined by a chord of the cycle. At most k − 2: a side of span
+    // k − 1 would hold both ends of a cycle edge without holding that edge.
+    std::vector<int> reach(k, k - 2);
     for (int i = 0; i < k; ++i) {
         const int u = cycle[i];
         for (int w : g.neighbours(u)) {
@@ -64,6 +65,11 @@ CornerSearch cornerAssignments(const PlaneGraph& g, const std::vector<int>& cycl
                     const int westSpan = nw + k - sw;
                     if (westSpan > reach[sw % k]) continue;
                     if (!covers(2, se, sw - se) || !covers(3, sw, westSpan)) continue;
+                    // Two empty sides in a row would put one room on all four.
+                    const int span[4] = {ne - nw, se - ne, sw - se, westSpan};
+                    bool fourSided = false;
+                    for (int s = 0; s < 4; ++s) fourSided = fourSided || (span[s] == 0 && span[(s + 1) % 4] == 0);
+                    if (fourSided) continue;
                     out.assignments.push_back({{nw, ne, se, sw}});
                     if (static_cast<int>(out.assignments.size()) >= limit) {
                         out.truncated = true;

@@ -3,8 +3,21 @@
 #include "augment/separating_triangles.h"
 
 #include <algorithm>
+#include <set>
 
 namespace abut {
+
+void nameVertices(ExtendedGraph& x, const std::vector<std::string>& roomIds) {
+    std::set<std::string> taken(roomIds.begin(), roomIds.end());
+    x.names = roomIds;
+    auto unique = [&](std::string name) {
+        while (taken.count(name)) name += "~";
+        taken.insert(name);
+        return name;
+    };
+    for (const char* p : {"N", "E", "S", "W"}) x.names.push_back(unique(p));
+    for (int i = 0; i < x.spareCount(); ++i) x.names.push_back(unique("spare" + std::to_string(i + 1)));
+}
 
 GraphCheck checkExtendedGraph(const ExtendedGraph& x) {
     const PlaneGraph& g = x.graph;

@@ -30,6 +30,10 @@ struct ExtendedGraph {
     int spareCount() const { return graph.vertexCount() - roomCount - 4; }
 };
 
+// Fills x.names: the room ids, then "N", "E", "S", "W", then "spare1"...;
+// a pole or spare name that a room id already uses gets a "~" suffix.
+void nameVertices(ExtendedGraph& x, const std::vector<std::string>& roomIds);
+
 struct GraphCheck {
     bool ok = true;
     std::string problem; // what is wrong, for tests and debug builds

@@ -1,0 +1,41 @@
+#include "cli_commands.h"
+
+#include <filesystem>
+
+namespace abut::cli {
+
+ParsedArgs parseArgs(const std::vector<std::string>& args, const std::set<std::string>& withValue,
+                     const std::set<std::string>& flags, std::ostream& err, const std::string& usage) {
+    ParsedArgs p;
+    for (std::size_t i = 0; i < args.size(); ++i) {
+        const std::string& a = args[i];
+        if (withValue.count(a)) {
+            if (i + 1 >= args.size()) {
+                err << "abut-cli: option " << a << " needs a value\nusage: abut-cli " << usage << "\n";
+                p.ok = false;
+                return p;
+            }
+            p.values[a] = args[++i];
+        } else if (flags.count(a)) {
+            p.flags.insert(a);
+        } else if (a.size() > 1 && a[0] == '-') {
+            err << "abut-cli: unknown option \"" << a << "\"\nusage: abut-cli " << usage << "\n";
+            p.ok = false;
+            return p;
+        } else {
+            p.positional.push_back(a);
+        }
+    }
+    return p;
+}
+
+bool refuseToOverwriteInput(const std::string& input, const std::string& target, std::ostream& err) {
+    std::error_code ec;
+    if (std::filesystem::exists(target, ec) && std::filesystem::equivalent(input, target, ec)) {
+        err << target << ": refusing to overwrite the input file; choose another output\n";
+        return false;
+    }
+    return true;
+}
+
+} // namespace abut::cli

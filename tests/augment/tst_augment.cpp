@@ -1,0 +1,321 @@
+// From a brief to an extended graph: planarity witnesses, separating
+// triangles, facades, small and disconnected briefs, and the checker on
+// thousands of random briefs.
+#include "augment/augment.h"
+#include "augment/separating_triangles.h"
+#include "augment/triangulate.h"
+#include "embed/planar_embedding.h"
+#include "io/project_io.h"
+#include "../support/random_briefs.h"
+
+#include <boost/graph/adjacency_list.hpp>
+#include <boost/graph/is_kuratowski_subgraph.hpp>
+
+#include <QtTest>
+
+using namespace abut;
+using abut::testing::briefFromEdges;
+
+namespace {
+
+std::vector<std::pair<int, int>> completeGraph(int n) {
+    std::vector<std::pair<int, int>> e;
+    for (int i = 0; i < n; ++i)
+        for (int j = i + 1; j < n; ++j) e.emplace_back(i, j);
+    return e;
+}
+
+std::vector<std::pair<int, int>> completeBipartite33() {
+    std::vector<std::pair<int, int>> e;
+    for (int i = 0; i < 3; ++i)
+        for (int j = 3; j < 6; ++j) e.emplace_back(i, j);
+    return e;
+}
+
+bool hasCode(const AugmentResult& r, const std::string& code) {
+    return std::any_of(r.diagnostics.begin(), r.diagnostics.end(),
+                       [&](const Diagnostic& d) { return d.code == code; });
+}
+
+} // namespace
+
+class TestAugment : public QObject {
+    Q_OBJECT
+private slots:
+    void kuratowskiWitness_data();
+    void kuratowskiWitness();
+    void nonPlanarBriefDropsTheCheapest();
+    void separatingTriangleFourRooms();
+    void fourWayStudioSample();
+    void samplesFeasible_data();
+    void samplesFeasible();
+    void disconnectedBrief();
+    void singleRoom();
+    void twoRoomsHonourFacades_data();
+    void twoRoomsHonourFacades();
+    void facadeConflictNamed();
+    void pinwheel();
+    void sketchEmbeddingKept();
+    void shouldDroppedBeforeMust();
+    void randomPlanarBriefs();
+    void everyCornerAssignmentBuilds();
+    void stuckFaceGetsSpares();
+    void maximalPlanarEdgeCount();
+};
+
+void TestAugment::kuratowskiWitness_data() {
+    QTest::addColumn<int>("n");
+    QTest::addColumn<QString>("kind");
+    QTest::newRow("K5") << 5 << "K5";
+    QTest::newRow("K3,3") << 6 << "K33";
+    QTest::newRow("K6") << 6 << "K6";
+}
+
+void TestAugment::kuratowskiWitness() {
+    QFETCH(int, n);
+    QFETCH(QString, kind);
+    const auto edges = kind == "K33" ? completeBipartite33() : completeGraph(n);
+    const EmbeddingResult e = embedPlanar(n, edges);
+    QCOMPARE(e.status, EmbeddingStatus::NonPlanar);
+    QVERIFY(!e.witnessEdges.empty());
+    // Boost's own checker must accept the witness as a Kuratowski subgraph.
+    using G = boost::adjacency_list<boost::vecS, boost::vecS, boost::undirectedS,
+                                    boost::property<boost::vertex_index_t, int>,
+                                    boost::property<boost::edge_index_t, int>>;
+    G g(n);
+    std::vector<boost::graph_traits<G>::edge_descriptor> witness;
+    for (int i : e.witnessEdges) witness.push_back(boost::add_edge(edges[i].first, edges[i].second, g).first);
+    QVERIFY(boost::is_kuratowski_subgraph(g, witness.begin(), witness.end()));
+}
+
+void TestAugment::nonPlanarBriefDropsTheCheapest() {
+    // K5 where one adjacency is a 'should' wall: that one is dropped.
+    Brief b = briefFromEdges(5, completeGraph(5));
+    b.adjacencies[7].priority = Priority::Should;
+    b.adjacencies[7].kind = AdjacencyKind::Wall;
+    const AugmentResult r = buildExtendedGraph(b);
+    QVERIFY(r.status != AugmentStatus::Internal);
+    QVERIFY(hasCode(r, "non-planar"));
+    const auto& d = *std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                  [](const Diagnostic& x) { return x.code == "non-planar"; });
+    QVERIFY(QString::fromStdString(d.message).contains("K5"));
+    QVERIFY(std::count(r.dropped.begin(), r.dropped.end(), 7) == 1);
+}
+
+void TestAugment::separatingTriangleFourRooms() {
+    // Four rooms that must all touch: K4 has no rectangular dual (any embedding
+    // puts one room inside a triangle of the other three; references.md).
+    const Brief b = briefFromEdges(4, completeGraph(4));
+    const AugmentResult r = buildExtendedGraph(b);
+    QCOMPARE(r.status, AugmentStatus::Compromised);
+    QCOMPARE(r.dropped.size(), std::size_t(1));
+    QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
+}
+
+void TestAugment::fourWayStudioSample() {
+    const LoadResult l = loadProject(ABUT_SAMPLES "/four-way-studio.abut.json");
+    QVERIFY(l.ok());
+    const AugmentResult r = buildExtendedGraph(l.brief);
+    QCOMPARE(r.status, AugmentStatus::Compromised);
+    const auto it = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
+                                 [](const Diagnostic& d) { return d.code == "dropped-adjacency"; });
+    QVERIFY(it != r.diagnostics.end());
+    const QString msg = QString::fromStdString(it->message);
+    QVERIFY2(msg.contains("must all touch each other"), qPrintable(msg));
+    for (const char* room : {"Studio", "Office", "Archive", "Meeting room"}) QVERIFY(msg.contains(room));
+    QCOMPARE(it->rooms.size(), std::size_t(4));
+}
+
+void TestAugment::samplesFeasible_data() {
+    QTest::addColumn<QString>("file");
+    for (const char* f : {"family-house", "clinic", "office-floor"}) QTest::newRow(f) << f;
+}
+
+void TestAugment::samplesFeasible() {
+    QFETCH(QString, file);
+    const LoadResult l = loadProject((QString(ABUT_SAMPLES "/") + file + ".abut.json").toStdString());
+    QVERIFY(l.ok());
+    const AugmentResult r = buildExtendedGraph(l.brief);
+    QCOMPARE(r.status, AugmentStatus::Feasible);
+    QVERIFY(r.unmetFacade.empty());
+    QVERIFY(checkExtendedGraph(r.extended, l.brief, r.dropped).ok);
+}
+
+void TestAugment::disconnectedBrief() {
+    // Rooms without any adjacency, and two separate groups: still a plan.
+    Brief b = briefFromEdges(7, {{0, 1}, {1, 2}, {3, 4}});
+    const AugmentResult r = buildExtendedGraph(b);
+    QCOMPARE(r.status, AugmentStatus::Feasible);
+    QVERIFY(r.dropped.empty());
+    QVERIFY(hasCode(r, "added-contact"));
+    QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
+    const Brief none = briefFromEdges(5, {});
+    const AugmentResult r2 = buildExtendedGraph(none);
+    QCOMPARE(r2.status, AugmentStatus::Feasible);
+    QVERIFY(checkExtendedGraph(r2.extended, none, {}).ok);
+}
+
+void TestAugment::singleRoom() {
+    Brief b = briefFromEdges(1, {});
+    b.rooms[0].facade.anySide = true;
+    const AugmentResult r = buildExtendedGraph(b);
+    QCOMPARE(r.status, AugmentStatus::Feasible);
+    QCOMPARE(r.extended.graph.vertexCount(), 5);
+    QVERIFY(checkExtendedGraph(r.extended).ok);
+    QCOMPARE(buildExtendedGraph(Brief{}).status, AugmentStatus::Empty);
+}
+
+void TestAugment::twoRoomsHonourFacades_data() {
+    QTest::addColumn<int>("wish0");
+    QTest::addColumn<int>("wish1");
+    for (int a = 0; a < 4; ++a)
+        for (int b = 0; b < 4; ++b)
+            if (a != b) QTest::addRow("%c-%c", sideLetter(allSides[a]), sideLetter(allSides[b])) << a << b;
+}
+
+void TestAugment::twoRoomsHonourFacades() {
+    QFETCH(int, wish0);
+    QFETCH(int, wish1);
+    Brief b = briefFromEdges(2, {{0, 1}});
+    b.rooms[0].facade.add(allSides[wish0]);
+    b.rooms[1].facade.add(allSides[wish1]);
+    const AugmentResult r = buildExtendedGraph(b);
+    QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
+    QCOMPARE(r.status, AugmentStatus::Feasible);
+    QVERIFY(r.extended.graph.hasEdge(0, r.extended.pole(allSides[wish0])));
+    QVERIFY(r.extended.graph.hasEdge(1, r.extended.pole(allSides[wish1])));
+}
+
+void TestAugment::facadeConflictNamed() {
+    // One room spanning north to south and another spanning east to west
+    // would have to cross: no plan meets both wishes.
+    Brief b = briefFromEdges(4, {{0, 1}, {1, 2}, {2, 3}, {3, 0}});
+    b.rooms[0].facade.add(Side::N);
+    b.rooms[0].facade.add(Side::S);
+    b.rooms[2].facade.add(Side::E);
+    b.rooms[2].facade.add(Side::W);
+    const AugmentResult r = buildExtendedGraph(b);
+    QCOMPARE(r.status, AugmentStatus::Compromised);
+    QVERIFY(hasCode(r, "facade-conflict"));
+    QVERIFY(!r.unmetFacade.empty());
+    QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
+}
+
+void TestAugment::pinwheel() {
+    // The five-room pinwheel: a centre room touching four rooms in a ring.
+    const Brief b = briefFromEdges(5, {{0, 1}, {0, 2}, {0, 3}, {0, 4}, {1, 2}, {2, 3}, {3, 4}, {4, 1}});
+    const AugmentResult r = buildExtendedGraph(b);
+    QCOMPARE(r.status, AugmentStatus::Feasible);
+    QCOMPARE(r.extended.spareCount(), 0);
+    // Each ring room reaches exactly one side in the pinwheel.
+    for (int v = 1; v <= 4; ++v) {
+        int poles = 0;
+        for (Side s : allSides) poles += r.extended.graph.hasEdge(v, r.extended.pole(s));
+        QVERIFY(poles >= 1);
+    }
+}
+
+void TestAugment::sketchEmbeddingKept() {
+    const LoadResult l = loadProject(ABUT_SAMPLES "/family-house.abut.json");
+    QVERIFY(l.ok());
+    QVERIFY(buildExtendedGraph(l.brief).embeddingFromSketch);
+    // A crossing sketch falls back to a computed embedding.
+    Brief b = briefFromEdges(4, {{0, 2}, {1, 3}});
+    b.sketch = {{"r0", {0, 0}}, {"r1", {1, 0}}, {"r2", {1, 1}}, {"r3", {0, 1}}};
+    const AugmentResult r = buildExtendedGraph(b);
+    QVERIFY(!r.embeddingFromSketch);
+    QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
+}
+
+void TestAugment::shouldDroppedBeforeMust() {
+    // K4 with one 'should' wall: that one is dropped, and the brief is feasible.
+    Brief b = briefFromEdges(4, completeGraph(4));
+    b.adjacencies[2].priority = Priority::Should;
+    b.adjacencies[2].kind = AdjacencyKind::Wall;
+    const AugmentResult r = buildExtendedGraph(b);
+    QCOMPARE(r.status, AugmentStatus::Feasible);
+    QCOMPARE(r.dropped, std::vector<int>{2});
+}
+
+void TestAugment::randomPlanarBriefs() {
+    // 2,000 seeded random briefs, 5–60 rooms: every result passes the checker.
+    std::mt19937 rng(20261201);
+    int compromised = 0, withSpares = 0;
+    for (int i = 0; i < 2000; ++i) {
+        abut::testing::RandomBriefOptions o;
+        o.rooms = 5 + static_cast<int>(rng() % 56);
+        o.keepEdge = 0.3 + 0.7 * (rng() % 100) / 100.0;
+        o.facadeWish = (rng() % 4) * 0.15;
+        o.withSketch = i % 5 == 0;
+        const Brief b = abut::testing::randomBrief(o, rng);
+        const AugmentResult r = buildExtendedGraph(b);
+        QVERIFY2(r.status != AugmentStatus::Internal, r.summary.c_str());
+        const GraphCheck c = checkExtendedGraph(r.extended, b, r.dropped);
+        QVERIFY2(c.ok, (std::to_string(i) + ": " + c.problem).c_str());
+        compromised += r.status == AugmentStatus::Compromised;
+        withSpares += r.extended.spareCount() > 0;
+    }
+    qInfo("2000 random briefs: %d compromised, %d with spare spaces", compromised, withSpares);
+}
+
+void TestAugment::everyCornerAssignmentBuilds() {
+    std::mt19937 rng(7);
+    for (int i = 0; i < 200; ++i) {
+        abut::testing::RandomBriefOptions o;
+        o.rooms = 5 + static_cast<int>(rng() % 20);
+        const Brief b = abut::testing::randomBrief(o, rng);
+        const AugmentResult r = buildExtendedGraph(b);
+        std::vector<std::string> ids;
+        for (const Room& room : b.rooms) ids.push_back(room.id);
+        const std::size_t count = std::min<std::size_t>(r.frame.corners.size(), 60);
+        for (std::size_t c = 0; c < count; ++c) {
+            const ExtendedGraph x = extendFrame(r.frame, ids, r.frame.corners[c]);
+            const GraphCheck check = checkExtendedGraph(x);
+            QVERIFY2(check.ok, check.problem.c_str());
+        }
+    }
+}
+
+void TestAugment::stuckFaceGetsSpares() {
+    // A wheel: six rooms in a ring around a hub. The face on the far side of
+    // the ring has no safe chord (every pair shares the hub), so it gets a
+    // spare space, and no separating triangle appears.
+    std::vector<std::pair<int, int>> edges;
+    std::vector<std::optional<SketchPoint>> sketch;
+    for (int i = 0; i < 6; ++i) {
+        edges.emplace_back(i, (i + 1) % 6);
+        edges.emplace_back(i, 6);
+        sketch.push_back(SketchPoint{std::cos(i * M_PI / 3), std::sin(i * M_PI / 3)});
+    }
+    sketch.push_back(SketchPoint{0, 0});
+    EmbeddingResult e = embedPlanar(7, edges, sketch);
+    QVERIFY(e.fromSketch);
+    PlaneGraph& g = e.graph;
+    std::vector<int> ring;
+    for (const auto& f : g.faces())
+        if (f.size() == 6) ring = f;
+    QCOMPARE(ring.size(), std::size_t(6));
+    TriangulationReport rep;
+    triangulateFace(g, ring, rep);
+    QCOMPARE(rep.spares.size(), std::size_t(1));
+    QVERIFY(rep.addedEdges.empty());
+    for (const auto& f : g.faces()) QCOMPARE(f.size(), std::size_t(3));
+    // A triangulated sphere: every triangle is a face (pass no outer face).
+    QVERIFY(separatingTriangles(g, {}).empty());
+    QCOMPARE(g.edgeCount(), 3 * g.vertexCount() - 6);
+}
+
+void TestAugment::maximalPlanarEdgeCount() {
+    // A maximal planar graph has 3n − 6 edges (references.md): the rooms part
+    // of an extended graph plus the poles has 3V − 7 = 3(V) − 6 − 1 (the
+    // outer face is a quadrangle). Checked on a stacked triangulation.
+    std::mt19937 rng(3);
+    const auto edges = abut::testing::randomPlanarEdges(30, 1.0, rng);
+    QCOMPARE(static_cast<int>(edges.size()), 3 * 30 - 6);
+    const EmbeddingResult e = embedPlanar(30, edges);
+    QCOMPARE(e.status, EmbeddingStatus::Planar);
+    QCOMPARE(static_cast<int>(e.graph.faces().size()), 2 * 30 - 4);
+}
+
+QTEST_GUILESS_MAIN(TestAugment)
+#include "tst_augment.moc"
