@@ -29,6 +29,7 @@ ParsedArgs parseArgs(const std::vector<std::string>& args, const std::set<std::s
 bool refuseToOverwriteInput(const std::string& input, const std::string& target, std::ostream& err);
 
 int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
+int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
 int runExtended(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
 
 } // namespace abut::cli

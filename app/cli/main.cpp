@@ -12,6 +12,8 @@ namespace {
 void printUsage(std::ostream& out) {
     out << "usage: abut-cli COMMAND ...\n"
            "  check PROJECT [--json]     validate a brief and say whether a plan exists\n"
+           "  plan PROJECT -o PLAN.json [--variants K] [--strict] [--seed S]\n"
+           "                             compute ranked, sized variants and write them\n"
            "  extended PROJECT -o EXT.json  write the extended graph (rooms, poles, spare spaces)\n"
            "  --help                     this text\n"
            "exit codes: 0 done/feasible, 2 bad input, 3 no plan (infeasible), 4 internal error\n";
@@ -28,6 +30,7 @@ int main(int argc, char** argv) {
     const std::string command = args[0];
     args.erase(args.begin());
     if (command == "check") return abut::cli::runCheck(args, std::cout, std::cerr);
+    if (command == "plan") return abut::cli::runPlan(args, std::cout, std::cerr);
     if (command == "extended") return abut::cli::runExtended(args, std::cout, std::cerr);
     std::cerr << "abut-cli: unknown command \"" << command << "\"\n";
     printUsage(std::cerr);

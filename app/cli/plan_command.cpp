@@ -1,0 +1,84 @@
+#include "cli_commands.h"
+
+#include "io/atomic_file.h"
+#include "io/plan_io.h"
+#include "io/project_io.h"
+#include "plan/plan_builder.h"
+
+namespace abut::cli {
+
+namespace {
+
+bool parsePositive(const std::string& text, long long& value) {
+    try {
+        std::size_t used = 0;
+        value = std::stoll(text, &used);
+        return used == text.size() && value >= 0;
+    } catch (...) {
+        return false;
+    }
+}
+
+} // namespace
+
+int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostream& err) {
+    const std::string usage = "plan PROJECT -o PLAN.json [--variants K] [--strict] [--seed S]";
+    const ParsedArgs a = parseArgs(args, {"-o", "--variants", "--seed"}, {"--strict"}, err, usage);
+    if (!a.ok) return exitBadInput;
+    if (a.positional.size() != 1 || !a.values.count("-o")) {
+        err << "usage: abut-cli " << usage << "\n";
+        return exitBadInput;
+    }
+    PlanOptions options;
+    long long number = 0;
+    if (a.values.count("--variants")) {
+        if (!parsePositive(a.values.at("--variants"), number) || number < 1 || number > 10000) {
+            err << "abut-cli plan: --variants takes a whole number from 1 to 10000\n";
+            return exitBadInput;
+        }
+        options.variants = static_cast<int>(number);
+    }
+    if (a.values.count("--seed")) {
+        if (!parsePositive(a.values.at("--seed"), number) || number > 4294967295LL) {
+            err << "abut-cli plan: --seed takes a whole number from 0 to 4294967295\n";
+            return exitBadInput;
+        }
+        options.seed = static_cast<unsigned>(number);
+    }
+    const std::string& path = a.positional[0];
+    const std::string& target = a.values.at("-o");
+    if (!refuseToOverwriteInput(path, target, err)) return exitBadInput;
+    const LoadResult loaded = loadProject(path);
+    if (!loaded.ok()) {
+        for (const FileError& e : loaded.errors) err << e.toString() << "\n";
+        return exitBadInput;
+    }
+    const Plan plan = buildPlan(loaded.brief, options);
+    if (plan.status == PlanStatus::Internal) {
+        err << path << ": " << plan.summary << "\n";
+        return exitInternal;
+    }
+    if (plan.status == PlanStatus::NoPlan) {
+        err << path << ": no plan: " << plan.summary << "\n";
+        return exitNoPlan;
+    }
+    const bool strict = a.flags.count("--strict") > 0;
+    if (strict && plan.status == PlanStatus::Compromised) {
+        err << path << ": no plan keeps every 'must' adjacency and facade wish (--strict): " << plan.summary
+            << "\n";
+        for (const Diagnostic& d : plan.diagnostics)
+            if (d.severity != Severity::Info) err << "  " << d.message << "\n";
+        return exitNoPlan;
+    }
+    const WriteResult w = writeFileAtomically(target, serializePlan(loaded.brief, plan));
+    if (!w.ok) {
+        err << w.message << "\n";
+        return exitBadInput;
+    }
+    out << target << ": " << plan.variants.size() << " variant(s); " << plan.summary << "\n";
+    for (const Diagnostic& d : plan.diagnostics)
+        if (d.severity != Severity::Info) out << "  " << toString(d.severity) << ": " << d.message << "\n";
+    return exitOk;
+}
+
+} // namespace abut::cli

@@ -1,0 +1,61 @@
+#include "io/plan_io.h"
+
+#include <cmath>
+
+namespace abut {
+
+namespace {
+
+// Scores and metrics: six decimals are plenty and keep files readable.
+double tidy(double v) { return std::round(v * 1e6) / 1e6; }
+
+// Rectangles keep full precision: rounded sides would open hairline gaps
+// between rooms that share a wall.
+OrderedJson rectJson(const Rect& r) {
+    return {{"x", r.x0}, {"y", r.y0}, {"width", r.width()}, {"depth", r.depth()}};
+}
+
+} // namespace
+
+std::string serializePlan(const Brief& brief, const Plan& plan) {
+    OrderedJson j;
+    j["format"] = "abut.plan";
+    j["version"] = 1;
+    j["units"] = plan.units;
+    j["footprint"] = {{"width", plan.footprint.width}, {"depth", plan.footprint.depth}};
+    j["doorWidth"] = brief.doorWidth;
+    j["status"] = toString(plan.status);
+    OrderedJson variants = OrderedJson::array();
+    for (const PlanVariant& v : plan.variants) {
+        OrderedJson vj;
+        vj["rank"] = v.rank;
+        vj["score"] = tidy(v.score);
+        OrderedJson rooms = OrderedJson::array();
+        for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+            OrderedJson r = {{"id", brief.rooms[i].id}};
+            r.update(rectJson(v.rooms[i]));
+            rooms.push_back(r);
+        }
+        vj["rooms"] = rooms;
+        OrderedJson spaces = OrderedJson::array();
+        for (const Rect& s : v.spaces) spaces.push_back(rectJson(s));
+        vj["spaces"] = spaces;
+        OrderedJson dropped = OrderedJson::array();
+        for (int d : v.dropped) dropped.push_back({brief.adjacencies[d].a, brief.adjacencies[d].b});
+        vj["dropped"] = dropped;
+        OrderedJson unmet = OrderedJson::array();
+        for (int r : v.unmetFacade) unmet.push_back(brief.rooms[r].id);
+        vj["unmetFacade"] = unmet;
+        vj["metrics"] = {{"worstAreaError", tidy(v.metrics.worstAreaError)},
+                         {"meanAreaError", tidy(v.metrics.meanAreaError)},
+                         {"worstAspect", tidy(v.metrics.worstAspect)},
+                         {"shortDoorWalls", v.metrics.shortDoorWalls},
+                         {"narrowRooms", v.metrics.narrowRooms},
+                         {"spareArea", tidy(v.metrics.spareArea)}};
+        variants.push_back(vj);
+    }
+    j["variants"] = variants;
+    return j.dump(2) + "\n";
+}
+
+} // namespace abut

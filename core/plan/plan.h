@@ -1,0 +1,58 @@
+// A plan: one or more sized variants of a brief, each a set of axis-aligned
+// room rectangles and spare spaces that tile the footprint.
+#pragma once
+
+#include "augment/augment.h"
+#include "brief/brief.h"
+#include "diagnostics.h"
+#include "dual/rectangular_dual.h"
+#include "label/regular_edge_labeling.h"
+
+#include <string>
+#include <vector>
+
+namespace abut {
+
+struct PlanMetrics {
+    double worstAreaError = 0;   // max |achieved − target| / target over rooms
+    double meanAreaError = 0;
+    double worstAspect = 0;      // max long/short side over rooms
+    int shortDoorWalls = 0;      // door adjacencies with less than doorWidth of wall
+    int narrowRooms = 0;         // rooms narrower than their minWidth
+    double spareArea = 0;        // total area of spare spaces
+};
+
+struct PlanVariant {
+    int rank = 1;
+    double score = 0;
+    std::vector<Rect> rooms;  // one per brief room, brief order
+    std::vector<Rect> spaces; // spare spaces
+    std::vector<int> dropped; // brief adjacency indices not realised (door walls too short included)
+    std::vector<int> unmetFacade; // rooms that miss a facade side they wish for
+    PlanMetrics metrics;
+    // The combinatorial layout the rectangles come from (for sizing and dragging).
+    ExtendedGraph extended;
+    RegularEdgeLabeling labeling;
+};
+
+enum class PlanStatus { Ok, Compromised, NoPlan, Internal };
+const char* toString(PlanStatus s);
+
+struct Plan {
+    PlanStatus status = PlanStatus::Ok;
+    std::string summary;
+    std::string units = "m";
+    Footprint footprint;
+    std::vector<PlanVariant> variants; // best first
+    std::vector<Diagnostic> diagnostics;
+};
+
+struct PlanOptions {
+    int variants = 10;               // how many to keep
+    unsigned seed = 1;               // for choices that are made at random
+    double anyWall = 0.3;            // m: shortest wall that counts as a contact
+    double spareMinimum = 0.3;       // m: smallest side of a spare space
+    int cornerTrials = 40;           // corner assignments tried per brief
+};
+
+} // namespace abut

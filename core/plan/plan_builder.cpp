@@ -1,0 +1,230 @@
+#include "plan/plan_builder.h"
+
+#include <algorithm>
+#include <cmath>
+
+namespace abut {
+
+const char* toString(PlanStatus s) {
+    switch (s) {
+    case PlanStatus::Ok: return "ok";
+    case PlanStatus::Compromised: return "compromised";
+    case PlanStatus::NoPlan: return "no-plan";
+    case PlanStatus::Internal: return "internal-error";
+    }
+    return "?";
+}
+
+namespace {
+
+double sharedWall(const Rect& a, const Rect& b, double tol = 1e-9) {
+    const double ox = std::min(a.x1, b.x1) - std::max(a.x0, b.x0);
+    const double oy = std::min(a.y1, b.y1) - std::max(a.y0, b.y0);
+    if ((std::abs(a.x1 - b.x0) < tol || std::abs(b.x1 - a.x0) < tol) && oy > tol) return oy;
+    if ((std::abs(a.y1 - b.y0) < tol || std::abs(b.y1 - a.y0) < tol) && ox > tol) return ox;
+    return 0.0;
+}
+
+} // namespace
+
+PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,
+                          const PlanOptions& options) {
+    const Footprint fp = brief.effectiveFootprint();
+    const SegmentStructure segs = maximalSegments(x, rel);
+    const int n = x.graph.vertexCount();
+    std::vector<double> natural(n, 0.0), hardMin(n, 0.0);
+    for (int v = 0; v < n; ++v) {
+        if (x.isRoom(v)) {
+            natural[v] = std::sqrt(brief.rooms[v].area);
+            hardMin[v] = brief.rooms[v].minWidth.value_or(0.0);
+        } else if (x.isSpare(v)) {
+            hardMin[v] = options.spareMinimum;
+        }
+    }
+    DualWeights w;
+    w.anyWall = options.anyWall;
+    w.minWall.assign(segs.walls.size(), 0.0);
+    for (std::size_t i = 0; i < segs.walls.size(); ++i) {
+        const auto& wall = segs.walls[i];
+        if (!x.isRoom(wall.u) || !x.isRoom(wall.v)) continue;
+        for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
+            const Adjacency& adj = brief.adjacencies[a];
+            const int p = brief.roomIndex(adj.a), q = brief.roomIndex(adj.b);
+            if (adj.kind == AdjacencyKind::Door && std::minmax(p, q) == std::minmax(wall.u, wall.v))
+                w.minWall[i] = brief.doorWidth;
+        }
+    }
+    auto layoutAt = [&](double t) {
+        w.minWidth.assign(n, 1.0);
+        w.minDepth.assign(n, 1.0);
+        for (int v = 0; v < n; ++v) {
+            w.minWidth[v] = w.minDepth[v] = std::max(hardMin[v], t * natural[v]);
+            if (w.minWidth[v] <= 0) w.minWidth[v] = w.minDepth[v] = 1e-3;
+        }
+        return longestPathLayout(x, segs, w);
+    };
+    auto fits = [&](const DualLayout& l) { return l.width <= fp.width && l.depth <= fp.depth; };
+    double lo = 0.0, hi = 1.0;
+    while (fits(layoutAt(hi)) && hi < 1e6) {
+        lo = hi;
+        hi *= 2.0;
+    }
+    for (int i = 0; i < 50 && fits(layoutAt(lo)); ++i) {
+        const double mid = 0.5 * (lo + hi);
+        (fits(layoutAt(mid)) ? lo : hi) = mid;
+    }
+    const DualLayout layout = layoutAt(lo);
+    const double sx = fp.width / layout.width, sy = fp.depth / layout.depth;
+    auto scaled = [&](const Rect& r) { return Rect{r.x0 * sx, r.y0 * sy, r.x1 * sx, r.y1 * sy}; };
+
+    PlanVariant out;
+    out.extended = x;
+    out.labeling = rel;
+    for (int v = 0; v < n; ++v) {
+        if (x.isRoom(v)) out.rooms.push_back(scaled(layout.rects[v]));
+        else if (x.isSpare(v)) out.spaces.push_back(scaled(layout.rects[v]));
+    }
+    // Snap the outline exactly (scaling leaves round-off at the far edges).
+    auto snap = [&](Rect& r) {
+        if (std::abs(r.x1 - fp.width) < 1e-9 * fp.width) r.x1 = fp.width;
+        if (std::abs(r.y1 - fp.depth) < 1e-9 * fp.depth) r.y1 = fp.depth;
+    };
+    for (Rect& r : out.rooms) snap(r);
+    for (Rect& r : out.spaces) snap(r);
+
+    // Dropped: what this extended graph does not join (triangulation may put
+    // back a contact for one corner assignment and not for another).
+    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a)
+        if (!x.graph.hasEdge(brief.roomIndex(brief.adjacencies[a].a), brief.roomIndex(brief.adjacencies[a].b)))
+            out.dropped.push_back(static_cast<int>(a));
+    PlanMetrics& m = out.metrics;
+    double sumErr = 0;
+    for (std::size_t i = 0; i < out.rooms.size(); ++i) {
+        const Rect& r = out.rooms[i];
+        const double err = std::abs(r.area() - brief.rooms[i].area) / brief.rooms[i].area;
+        m.worstAreaError = std::max(m.worstAreaError, err);
+        sumErr += err;
+        m.worstAspect = std::max(m.worstAspect, std::max(r.width(), r.depth()) / std::min(r.width(), r.depth()));
+        if (brief.rooms[i].minWidth && std::min(r.width(), r.depth()) < *brief.rooms[i].minWidth - 1e-9)
+            ++m.narrowRooms;
+    }
+    m.meanAreaError = out.rooms.empty() ? 0 : sumErr / out.rooms.size();
+    for (const Rect& r : out.spaces) m.spareArea += r.area();
+    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
+        const Adjacency& adj = brief.adjacencies[a];
+        if (adj.kind != AdjacencyKind::Door) continue;
+        if (std::count(out.dropped.begin(), out.dropped.end(), static_cast<int>(a))) continue;
+        const double wall = sharedWall(out.rooms[brief.roomIndex(adj.a)], out.rooms[brief.roomIndex(adj.b)]);
+        if (wall < brief.doorWidth - 1e-9) {
+            ++m.shortDoorWalls;
+            out.dropped.push_back(static_cast<int>(a));
+        }
+    }
+    std::sort(out.dropped.begin(), out.dropped.end());
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
+        const FacadeWish& wish = brief.rooms[i].facade;
+        bool met = true, any = false;
+        for (Side s : allSides) {
+            const bool touches = x.graph.hasEdge(static_cast<int>(i), x.pole(s));
+            any = any || touches;
+            if (wish.has(s)) met = met && touches;
+        }
+        if (wish.anySide) met = met && any;
+        if (!met) out.unmetFacade.push_back(static_cast<int>(i));
+    }
+    out.score = m.worstAreaError + 0.2 * m.meanAreaError + 0.5 * static_cast<double>(out.dropped.size()) +
+                0.5 * static_cast<double>(out.unmetFacade.size()) + 0.05 * std::max(0.0, m.worstAspect - 2.0);
+    return out;
+}
+
+std::string checkVariant(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
+    const double tol = 1e-6 * std::max(fp.width, fp.depth);
+    std::vector<Rect> all = v.rooms;
+    all.insert(all.end(), v.spaces.begin(), v.spaces.end());
+    double area = 0;
+    for (std::size_t i = 0; i < all.size(); ++i) {
+        const Rect& r = all[i];
+        if (!(r.width() > 0 && r.depth() > 0)) return "a rectangle has no area";
+        if (r.x0 < -tol || r.y0 < -tol || r.x1 > fp.width + tol || r.y1 > fp.depth + tol)
+            return "a rectangle leaves the footprint";
+        area += r.area();
+        for (std::size_t j = i + 1; j < all.size(); ++j) {
+            const Rect& s = all[j];
+            if (std::min(r.x1, s.x1) - std::max(r.x0, s.x0) > tol &&
+                std::min(r.y1, s.y1) - std::max(r.y0, s.y0) > tol)
+                return "two rectangles overlap";
+        }
+    }
+    if (std::abs(area - fp.width * fp.depth) > 1e-6 * fp.width * fp.depth) return "the footprint is not filled";
+    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
+        if (std::count(v.dropped.begin(), v.dropped.end(), static_cast<int>(a))) continue;
+        const Adjacency& adj = brief.adjacencies[a];
+        const double wall = sharedWall(v.rooms[brief.roomIndex(adj.a)], v.rooms[brief.roomIndex(adj.b)], tol);
+        const double need = adj.kind == AdjacencyKind::Door ? brief.doorWidth - tol : tol;
+        if (wall < need) return "adjacency " + adj.a + "–" + adj.b + " is not realised";
+    }
+    return {};
+}
+
+Plan buildPlan(const Brief& brief, const PlanOptions& options) {
+    Plan plan;
+    plan.units = brief.units;
+    plan.footprint = brief.effectiveFootprint();
+    const AugmentResult aug = buildExtendedGraph(brief);
+    plan.diagnostics = aug.diagnostics;
+    if (aug.status == AugmentStatus::Empty) {
+        plan.status = PlanStatus::NoPlan;
+        plan.summary = aug.summary;
+        return plan;
+    }
+    if (aug.status == AugmentStatus::Internal) {
+        plan.status = PlanStatus::Internal;
+        plan.summary = aug.summary;
+        return plan;
+    }
+    // Variants: the extended graphs of the best-ranked corner assignments.
+    std::vector<ExtendedGraph> graphs;
+    if (aug.frame.corners.empty()) {
+        graphs.push_back(aug.extended);
+    } else {
+        std::vector<std::string> ids;
+        for (const Room& r : brief.rooms) ids.push_back(r.id);
+        const int trials = std::min<int>(options.cornerTrials, static_cast<int>(aug.frame.corners.size()));
+        for (int c = 0; c < trials; ++c) graphs.push_back(extendFrame(aug.frame, ids, aug.frame.corners[c]));
+    }
+    for (const ExtendedGraph& x : graphs) {
+        const LabelingResult r = computeRegularEdgeLabeling(x);
+        const LabelingCheck c = r.status == LabelingStatus::Ok ? checkRegularEdgeLabeling(x, r.labeling)
+                                                               : LabelingCheck{false, r.message};
+        if (!c.ok) {
+            plan.status = PlanStatus::Internal;
+            plan.summary = "Internal error: no regular edge labeling (" + c.problem + "). Please report this brief.";
+            return plan;
+        }
+        PlanVariant v = layoutVariant(brief, x, r.labeling, options);
+        const std::string problem = checkVariant(brief, plan.footprint, v);
+        if (!problem.empty()) {
+            plan.status = PlanStatus::Internal;
+            plan.summary = "Internal error: the plan failed its check (" + problem + "). Please report this brief.";
+            return plan;
+        }
+        plan.variants.push_back(std::move(v));
+    }
+    std::stable_sort(plan.variants.begin(), plan.variants.end(),
+                     [](const PlanVariant& a, const PlanVariant& b) { return a.score < b.score; });
+    if (static_cast<int>(plan.variants.size()) > options.variants) plan.variants.resize(options.variants);
+    for (std::size_t i = 0; i < plan.variants.size(); ++i) plan.variants[i].rank = static_cast<int>(i) + 1;
+    const PlanVariant& v = plan.variants.front();
+    bool mustLost = !v.unmetFacade.empty();
+    for (int d : v.dropped) mustLost = mustLost || brief.adjacencies[d].priority == Priority::Must;
+    if (v.metrics.shortDoorWalls > 0)
+        plan.diagnostics.push_back({Severity::Warning, "short-door-wall",
+                                    std::to_string(v.metrics.shortDoorWalls) +
+                                        " door adjacency(ies) get less than a door's width of wall in the footprint.",
+                                    {}, {}});
+    plan.status = mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
+    plan.summary = aug.summary;
+    return plan;
+}
+
+} // namespace abut

@@ -1,0 +1,31 @@
+// Brief → plan: extended graph (augment/), regular edge labeling (label/),
+// rectangular dual (dual/), then fitted into the footprint.
+//
+// Fitting: every room asks for a natural side of t·√(target area) in both
+// directions (never below its minWidth), door adjacencies for doorWidth of
+// shared wall, other contacts for `anyWall`. The longest-path layout of
+// these minimum extents is monotone in t, so t is found by bisection as the
+// largest that fits the footprint, and the layout is then stretched to the
+// footprint (stretching keeps every minimum). Rooms only roughly approach
+// their target areas here; core/size does the sizing.
+//
+// Running time: O((V + E) · log(1/ε)) after the extended graph.
+#pragma once
+
+#include "plan/plan.h"
+
+namespace abut {
+
+Plan buildPlan(const Brief& brief, const PlanOptions& options = {});
+
+// One variant from a given extended graph and labeling. Its dropped
+// adjacencies are those `x` does not join, plus doors left too short.
+PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,
+                          const PlanOptions& options);
+
+// Independent-of-construction check of a variant against its brief: the
+// rectangles tile the footprint, every adjacency not listed as dropped is a
+// shared wall (doors at least doorWidth). Returns "" when valid.
+std::string checkVariant(const Brief& brief, const Footprint& footprint, const PlanVariant& v);
+
+} // namespace abut

@@ -1,0 +1,75 @@
+// Abut's benchmarks. Prints one "name: value unit" line per figure.
+//   abut_bench            all sections
+//   abut_bench pipeline   extended graph → labeling → dual, against Boost's
+//                         Boyer–Myrvold planarity test on the same graph
+// Targets (not enforced here): linear scaling, and the pipeline at most 3× the
+// planarity test.
+#include "dual/rectangular_dual.h"
+#include "label/regular_edge_labeling.h"
+#include "../support/random_tilings.h"
+
+#include <boost/graph/adjacency_list.hpp>
+#include <boost/graph/boyer_myrvold_planar_test.hpp>
+
+#include <chrono>
+#include <cstdio>
+#include <string>
+
+using namespace abut;
+using Clock = std::chrono::steady_clock;
+
+namespace {
+
+double seconds(Clock::time_point a, Clock::time_point b) {
+    return std::chrono::duration<double>(b - a).count();
+}
+
+// Best of `repeats` runs, in seconds.
+template <typename F>
+double bestOf(int repeats, F&& f) {
+    double best = 1e300;
+    for (int i = 0; i < repeats; ++i) {
+        const auto t0 = Clock::now();
+        f();
+        best = std::min(best, seconds(t0, Clock::now()));
+    }
+    return best;
+}
+
+void pipeline() {
+    for (int n : {1000, 10000, 100000}) {
+        std::mt19937 rng(n);
+        const auto rects = abut::testing::randomSlicing(n, 100.0, 100.0, rng);
+        const ExtendedGraph x = abut::testing::extendedGraphOfTiling(rects, 100.0, 100.0);
+        const int repeats = n >= 100000 ? 3 : 10;
+        double checksum = 0;
+        const double ours = bestOf(repeats, [&] {
+            const LabelingResult r = computeRegularEdgeLabeling(x);
+            const SegmentStructure s = maximalSegments(x, r.labeling);
+            const DualLayout l = longestPathLayout(x, s, {});
+            checksum += l.width;
+        });
+        using G = boost::adjacency_list<boost::vecS, boost::vecS, boost::undirectedS,
+                                        boost::property<boost::vertex_index_t, int>,
+                                        boost::property<boost::edge_index_t, int>>;
+        G g(x.graph.vertexCount());
+        for (const auto& [u, v] : x.graph.edgeList()) boost::add_edge(u, v, g);
+        int k = 0;
+        for (auto [it, end] = boost::edges(g); it != end; ++it) boost::put(boost::edge_index, g, *it, k++);
+        const double planarity = bestOf(repeats, [&] {
+            checksum += boost::boyer_myrvold_planarity_test(g) ? 1 : 0;
+        });
+        std::printf("pipeline_time_per_room_n%d: %.3f us\n", n, 1e6 * ours / n);
+        std::printf("planarity_time_per_room_n%d: %.3f us\n", n, 1e6 * planarity / n);
+        std::printf("pipeline_over_planarity_n%d: %.2f x\n", n, ours / planarity);
+        if (checksum < 0) std::printf("%f\n", checksum);
+    }
+}
+
+} // namespace
+
+int main(int argc, char** argv) {
+    const std::string only = argc > 1 ? argv[1] : "";
+    if (only.empty() || only == "pipeline") pipeline();
+    return 0;
+}
