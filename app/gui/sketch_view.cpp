@@ -72,11 +72,18 @@ void SketchView::showBrief(const Brief& brief) {
 }
 
 void SketchView::fitAll() {
+    autoFit_ = true;
     const QRectF r = scene()->itemsBoundingRect().adjusted(-20, -20, 20, 20);
     if (!r.isEmpty()) fitInView(r, Qt::KeepAspectRatio);
 }
 
+void SketchView::resizeEvent(QResizeEvent* event) {
+    QGraphicsView::resizeEvent(event);
+    if (autoFit_) fitAll();
+}
+
 void SketchView::wheelEvent(QWheelEvent* event) {
+    autoFit_ = false;
     const double factor = std::pow(1.0015, event->angleDelta().y());
     setTransformationAnchor(QGraphicsView::AnchorUnderMouse);
     scale(factor, factor);

@@ -19,6 +19,10 @@ public:
 
 protected:
     void wheelEvent(QWheelEvent* event) override;
+    void resizeEvent(QResizeEvent* event) override;
+
+private:
+    bool autoFit_ = true; // keep fitting the whole sketch until the user zooms
 };
 
 } // namespace abut::gui

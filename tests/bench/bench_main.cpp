@@ -2,10 +2,13 @@
 //   abut_bench            all sections
 //   abut_bench pipeline   extended graph → labeling → dual, against Boost's
 //                         Boyer–Myrvold planarity test on the same graph
+//   abut_bench augment    brief → extended graph
 // Targets (not enforced here): linear scaling, and the pipeline at most 3× the
 // planarity test.
+#include "augment/augment.h"
 #include "dual/rectangular_dual.h"
 #include "label/regular_edge_labeling.h"
+#include "../support/random_briefs.h"
 #include "../support/random_tilings.h"
 
 #include <boost/graph/adjacency_list.hpp>
@@ -66,10 +69,24 @@ void pipeline() {
     }
 }
 
+// Brief → extended graph on random briefs (stacked triangulations, 70 % of
+// edges kept, 20 % facade wishes).
+void augment() {
+    for (int n : {50, 100, 200, 400, 800}) {
+        std::mt19937 rng(n);
+        abut::testing::RandomBriefOptions o;
+        o.rooms = n;
+        const Brief b = abut::testing::randomBrief(o, rng);
+        const double t = bestOf(3, [&] { buildExtendedGraph(b); });
+        std::printf("augment_time_per_room_n%d: %.1f us\n", n, 1e6 * t / n);
+    }
+}
+
 } // namespace
 
 int main(int argc, char** argv) {
     const std::string only = argc > 1 ? argv[1] : "";
     if (only.empty() || only == "pipeline") pipeline();
+    if (only.empty() || only == "augment") augment();
     return 0;
 }
