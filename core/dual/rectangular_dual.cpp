@@ -22,11 +22,13 @@ struct UnionFind {
     void join(int a, int b) { parent[find(a)] = find(b); }
 };
 
-// Compact union-find roots into 0..count-1.
-std::vector<int> compact(UnionFind& uf, int& count) {
-    std::vector<int> id(uf.parent.size(), -1), out(uf.parent.size());
+// Compact the union-find roots of the used side variables into 0..count-1;
+// unused ones (a pole's far sides) get -1.
+std::vector<int> compact(UnionFind& uf, const std::vector<char>& used, int& count) {
+    std::vector<int> id(uf.parent.size(), -1), out(uf.parent.size(), -1);
     count = 0;
     for (std::size_t i = 0; i < uf.parent.size(); ++i) {
+        if (!used[i]) continue;
         const int r = uf.find(static_cast<int>(i));
         if (id[r] < 0) id[r] = count++;
         out[i] = id[r];
@@ -76,8 +78,14 @@ SegmentStructure maximalSegments(const ExtendedGraph& x, const RegularEdgeLabeli
             if (rel.at[u][i] == EdgeLabel::OutRed) horizontal.join(2 * u + 1, 2 * v);
         }
     SegmentStructure s;
-    const std::vector<int> vid = compact(vertical, s.verticalCount);
-    const std::vector<int> hid = compact(horizontal, s.horizontalCount);
+    // Used sides: both of every room or spare; of the poles only the one facing in.
+    std::vector<char> usedV(2 * n, 0), usedH(2 * n, 0);
+    for (int v = 0; v < n; ++v)
+        if (!x.isPole(v)) usedV[2 * v] = usedV[2 * v + 1] = usedH[2 * v] = usedH[2 * v + 1] = 1;
+    usedV[2 * x.pole(Side::W) + 1] = usedV[2 * x.pole(Side::E)] = 1;
+    usedH[2 * x.pole(Side::S) + 1] = usedH[2 * x.pole(Side::N)] = 1;
+    const std::vector<int> vid = compact(vertical, usedV, s.verticalCount);
+    const std::vector<int> hid = compact(horizontal, usedH, s.horizontalCount);
     s.west.resize(n);
     s.east.resize(n);
     s.south.resize(n);

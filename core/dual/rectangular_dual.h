@@ -36,7 +36,7 @@ struct Rect {
 // lies on. Poles included (W's east side is segment westSegment, ...).
 struct SegmentStructure {
     int verticalCount = 0, horizontalCount = 0;
-    std::vector<int> west, east, south, north; // per vertex: segment ids
+    std::vector<int> west, east, south, north; // per vertex: segment ids (-1 for a pole's far sides)
     int westSegment = 0, eastSegment = 0, southSegment = 0, northSegment = 0;
     // For each edge u–v of a wall between two non-pole vertices: the segments
     // (of the other direction) where that wall starts and ends.

@@ -1,0 +1,241 @@
+#include "label/labeling_lattice.h"
+
+#include "dual/rectangular_dual.h"
+
+#include <algorithm>
+#include <numeric>
+#include <random>
+#include <set>
+
+namespace abut {
+
+namespace {
+
+bool isRed(EdgeLabel l) { return l == EdgeLabel::OutRed || l == EdgeLabel::InRed; }
+
+EdgeLabel turned(EdgeLabel l, Turn t) {
+    // Up (counter-clockwise): u west of v → u below v; u below v → u east of v.
+    if (t == Turn::Up) {
+        switch (l) {
+        case EdgeLabel::OutBlue: return EdgeLabel::OutRed;
+        case EdgeLabel::InBlue: return EdgeLabel::InRed;
+        case EdgeLabel::OutRed: return EdgeLabel::InBlue;
+        case EdgeLabel::InRed: return EdgeLabel::OutBlue;
+        default: return l;
+        }
+    }
+    switch (l) {
+    case EdgeLabel::OutRed: return EdgeLabel::OutBlue;
+    case EdgeLabel::InRed: return EdgeLabel::InBlue;
+    case EdgeLabel::InBlue: return EdgeLabel::OutRed;
+    case EdgeLabel::OutBlue: return EdgeLabel::InRed;
+    default: return l;
+    }
+}
+
+// The four-block rule at one inner vertex (counter-clockwise: out-red,
+// in-blue, in-red, out-blue). O(deg v).
+bool vertexRuleHolds(const std::vector<EdgeLabel>& lab) {
+    static const EdgeLabel order[4] = {EdgeLabel::OutRed, EdgeLabel::InBlue, EdgeLabel::InRed,
+                                       EdgeLabel::OutBlue};
+    const int d = static_cast<int>(lab.size());
+    int start = -1, changes = 0;
+    for (int i = 0; i < d; ++i)
+        if (lab[i] != lab[(i + d - 1) % d]) {
+            ++changes;
+            if (lab[i] == EdgeLabel::OutRed) start = i;
+        }
+    if (changes != 4 || start < 0) return false;
+    int block = 0;
+    for (int k = 0; k < d; ++k) {
+        const EdgeLabel l = lab[(start + k) % d];
+        if (l == order[block]) continue;
+        if (block < 3 && l == order[block + 1]) ++block;
+        else return false;
+    }
+    return block == 3;
+}
+
+// Neighbours of v on the left of the walk p → v → q (counter-clockwise from q to p).
+std::vector<int> leftArc(const PlaneGraph& g, int p, int v, int q) {
+    std::vector<int> out;
+    const auto& rot = g.neighbours(v);
+    const int d = static_cast<int>(rot.size());
+    for (int k = 1, i = g.position(v, q); k < d; ++k) {
+        const int u = rot[(i + k) % d];
+        if (u == p) break;
+        out.push_back(u);
+    }
+    return out;
+}
+
+} // namespace
+
+std::vector<FourCycle> fourCycles(const ExtendedGraph& x) {
+    const PlaneGraph& g = x.graph;
+    std::set<std::array<int, 4>> seen;
+    std::vector<FourCycle> out;
+    for (int a = 0; a < g.vertexCount(); ++a) {
+        if (x.isPole(a)) continue;
+        const auto& na = g.neighbours(a);
+        for (std::size_t i = 0; i < na.size(); ++i) {
+            const int b = na[i];
+            if (x.isPole(b)) continue;
+            for (std::size_t j = i + 1; j < na.size(); ++j) {
+                const int d = na[j];
+                if (x.isPole(d)) continue;
+                for (int c : g.commonNeighbours(b, d)) {
+                    if (c == a || x.isPole(c)) continue;
+                    // Canonical: smallest vertex first, then the smaller neighbour next.
+                    std::array<int, 4> cyc{a, b, c, d};
+                    const int m = static_cast<int>(std::min_element(cyc.begin(), cyc.end()) - cyc.begin());
+                    std::rotate(cyc.begin(), cyc.begin() + m, cyc.end());
+                    if (cyc[1] > cyc[3]) std::swap(cyc[1], cyc[3]);
+                    if (!seen.insert(cyc).second) continue;
+                    FourCycle fc;
+                    fc.vertices = cyc;
+                    // Which side is inside: the one that does not reach a pole.
+                    std::set<int> onCycle(cyc.begin(), cyc.end());
+                    for (int side = 0; side < 2 && fc.insideDarts.empty(); ++side) {
+                        std::vector<std::vector<int>> arcs(4);
+                        for (int k = 0; k < 4; ++k) {
+                            const int p = cyc[(k + 3) % 4], v = cyc[k], q = cyc[(k + 1) % 4];
+                            arcs[k] = side == 0 ? leftArc(g, p, v, q) : leftArc(g, q, v, p);
+                        }
+                        std::vector<int> stack;
+                        std::set<int> inside;
+                        for (const auto& arc : arcs)
+                            for (int u : arc)
+                                if (!onCycle.count(u) && inside.insert(u).second) stack.push_back(u);
+                        bool reachesPole = false;
+                        while (!stack.empty() && !reachesPole) {
+                            const int u = stack.back();
+                            stack.pop_back();
+                            if (x.isPole(u)) reachesPole = true;
+                            for (int w : g.neighbours(u))
+                                if (!onCycle.count(w) && inside.insert(w).second) stack.push_back(w);
+                        }
+                        if (reachesPole) continue;
+                        for (int k = 0; k < 4; ++k)
+                            for (int u : arcs[k]) fc.insideDarts.emplace_back(cyc[k], g.position(cyc[k], u));
+                        for (int u : inside)
+                            for (int t = 0; t < g.degree(u); ++t) fc.insideDarts.emplace_back(u, t);
+                        fc.touched.assign(cyc.begin(), cyc.end());
+                        fc.touched.insert(fc.touched.end(), inside.begin(), inside.end());
+                    }
+                    if (!fc.insideDarts.empty()) out.push_back(std::move(fc));
+                }
+            }
+        }
+    }
+    return out;
+}
+
+bool isAlternating(const ExtendedGraph& x, const RegularEdgeLabeling& rel, const FourCycle& c) {
+    const PlaneGraph& g = x.graph;
+    bool red[4];
+    for (int k = 0; k < 4; ++k) red[k] = isRed(rel.label(g, c.vertices[k], c.vertices[(k + 1) % 4]));
+    return red[0] != red[1] && red[1] != red[2] && red[2] != red[3];
+}
+
+bool flip(const ExtendedGraph& x, RegularEdgeLabeling& rel, const FourCycle& c, Turn turn) {
+    if (!isAlternating(x, rel, c)) return false;
+    for (const auto& [v, i] : c.insideDarts) rel.at[v][i] = turned(rel.at[v][i], turn);
+    bool ok = true;
+    for (int v : c.touched) ok = ok && vertexRuleHolds(rel.at[v]);
+    if (!ok) {
+        const Turn back = turn == Turn::Up ? Turn::Down : Turn::Up;
+        for (const auto& [v, i] : c.insideDarts) rel.at[v][i] = turned(rel.at[v][i], back);
+    }
+    return ok;
+}
+
+RegularEdgeLabeling minimalLabeling(const ExtendedGraph& x, RegularEdgeLabeling rel,
+                                    const std::vector<FourCycle>& cycles) {
+    for (bool changed = true; changed;) {
+        changed = false;
+        for (const FourCycle& c : cycles)
+            if (flip(x, rel, c, Turn::Down)) changed = true;
+    }
+    return rel;
+}
+
+LabelingEnumerator::LabelingEnumerator(const ExtendedGraph& x, const RegularEdgeLabeling& any,
+                                       std::uint32_t seed)
+    : x_(x), cycles_(fourCycles(x)) {
+    order_.resize(cycles_.size());
+    std::iota(order_.begin(), order_.end(), 0);
+    if (seed != 0) {
+        std::mt19937 rng(seed);
+        std::shuffle(order_.begin(), order_.end(), rng);
+    }
+    current_ = minimalLabeling(x, any, cycles_);
+}
+
+int LabelingEnumerator::firstDownFlippable(const RegularEdgeLabeling& rel) const {
+    RegularEdgeLabeling& probe = const_cast<RegularEdgeLabeling&>(rel);
+    for (int ci : order_) {
+        if (flip(x_, probe, cycles_[ci], Turn::Down)) {
+            flip(x_, probe, cycles_[ci], Turn::Up);
+            return ci;
+        }
+    }
+    return -1;
+}
+
+const RegularEdgeLabeling* LabelingEnumerator::next() {
+    if (!started_) {
+        started_ = true;
+        stack_.push_back({-1, 0});
+        listed_ = 1;
+        return &current_;
+    }
+    while (!stack_.empty()) {
+        Frame& top = stack_.back();
+        while (top.nextChild < static_cast<int>(order_.size())) {
+            const int ci = order_[top.nextChild++];
+            if (!flip(x_, current_, cycles_[ci], Turn::Up)) continue;
+            if (firstDownFlippable(current_) == ci) {
+                stack_.push_back({ci, 0});
+                ++listed_;
+                return &current_;
+            }
+            flip(x_, current_, cycles_[ci], Turn::Down);
+        }
+        const int undo = top.flippedUp;
+        stack_.pop_back();
+        if (undo >= 0) flip(x_, current_, cycles_[undo], Turn::Down);
+    }
+    return nullptr;
+}
+
+std::uint64_t countLabelings(const ExtendedGraph& x, const RegularEdgeLabeling& any, std::uint64_t cap) {
+    LabelingEnumerator e(x, any);
+    std::uint64_t n = 0;
+    while (n < cap && e.next()) ++n;
+    return n;
+}
+
+bool isOneSided(const ExtendedGraph& x, const RegularEdgeLabeling& rel) {
+    const SegmentStructure s = maximalSegments(x, rel);
+    std::vector<int> westOf(s.verticalCount, 0), eastOf(s.verticalCount, 0);
+    std::vector<int> southOf(s.horizontalCount, 0), northOf(s.horizontalCount, 0);
+    for (int v = 0; v < x.graph.vertexCount(); ++v) {
+        if (x.isPole(v)) continue;
+        ++westOf[s.east[v]]; // v lies west of its east segment
+        ++eastOf[s.west[v]];
+        ++southOf[s.north[v]];
+        ++northOf[s.south[v]];
+    }
+    for (int k = 0; k < s.verticalCount; ++k) {
+        if (k == s.westSegment || k == s.eastSegment) continue;
+        if (westOf[k] != 1 && eastOf[k] != 1) return false;
+    }
+    for (int k = 0; k < s.horizontalCount; ++k) {
+        if (k == s.southSegment || k == s.northSegment) continue;
+        if (southOf[k] != 1 && northOf[k] != 1) return false;
+    }
+    return true;
+}
+
+} // namespace abut
