@@ -46,6 +46,7 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
         OrderedJson unmet = OrderedJson::array();
         for (int r : v.unmetFacade) unmet.push_back(brief.rooms[r].id);
         vj["unmetFacade"] = unmet;
+        vj["oneSided"] = v.oneSided;
         vj["metrics"] = {{"worstAreaError", tidy(v.metrics.worstAreaError)},
                          {"meanAreaError", tidy(v.metrics.meanAreaError)},
                          {"worstAspect", tidy(v.metrics.worstAspect)},

@@ -34,21 +34,25 @@ EdgeLabel turned(EdgeLabel l, Turn t) {
 }
 
 // The four-block rule at one inner vertex (counter-clockwise: out-red,
-// in-blue, in-red, out-blue). O(deg v).
-bool vertexRuleHolds(const std::vector<EdgeLabel>& lab) {
+// in-blue, in-red, out-blue), reading the labels through `label(i)`. O(deg v).
+template <typename LabelAt>
+bool vertexRuleHolds(int d, LabelAt label) {
     static const EdgeLabel order[4] = {EdgeLabel::OutRed, EdgeLabel::InBlue, EdgeLabel::InRed,
                                        EdgeLabel::OutBlue};
-    const int d = static_cast<int>(lab.size());
     int start = -1, changes = 0;
-    for (int i = 0; i < d; ++i)
-        if (lab[i] != lab[(i + d - 1) % d]) {
+    EdgeLabel previous = label(d - 1);
+    for (int i = 0; i < d; ++i) {
+        const EdgeLabel l = label(i);
+        if (l != previous) {
             ++changes;
-            if (lab[i] == EdgeLabel::OutRed) start = i;
+            if (l == EdgeLabel::OutRed) start = i;
         }
+        previous = l;
+    }
     if (changes != 4 || start < 0) return false;
     int block = 0;
     for (int k = 0; k < d; ++k) {
-        const EdgeLabel l = lab[(start + k) % d];
+        const EdgeLabel l = label((start + k) % d);
         if (l == order[block]) continue;
         if (block < 3 && l == order[block + 1]) ++block;
         else return false;
@@ -118,8 +122,10 @@ std::vector<FourCycle> fourCycles(const ExtendedGraph& x) {
                         if (reachesPole) continue;
                         for (int k = 0; k < 4; ++k)
                             for (int u : arcs[k]) fc.insideDarts.emplace_back(cyc[k], g.position(cyc[k], u));
+                        fc.rimDarts = fc.insideDarts;
                         for (int u : inside)
                             for (int t = 0; t < g.degree(u); ++t) fc.insideDarts.emplace_back(u, t);
+                        fc.insideOnLeft = side == 0;
                         fc.touched.assign(cyc.begin(), cyc.end());
                         fc.touched.insert(fc.touched.end(), inside.begin(), inside.end());
                     }
@@ -138,16 +144,28 @@ bool isAlternating(const ExtendedGraph& x, const RegularEdgeLabeling& rel, const
     return red[0] != red[1] && red[1] != red[2] && red[2] != red[3];
 }
 
-bool flip(const ExtendedGraph& x, RegularEdgeLabeling& rel, const FourCycle& c, Turn turn) {
-    if (!isAlternating(x, rel, c)) return false;
-    for (const auto& [v, i] : c.insideDarts) rel.at[v][i] = turned(rel.at[v][i], turn);
-    bool ok = true;
-    for (int v : c.touched) ok = ok && vertexRuleHolds(rel.at[v]);
-    if (!ok) {
-        const Turn back = turn == Turn::Up ? Turn::Down : Turn::Up;
-        for (const auto& [v, i] : c.insideDarts) rel.at[v][i] = turned(rel.at[v][i], back);
+std::optional<Turn> flipSense(const ExtendedGraph& x, const RegularEdgeLabeling& rel, const FourCycle& c) {
+    if (!isAlternating(x, rel, c)) return std::nullopt;
+    for (Turn t : {Turn::Up, Turn::Down}) {
+        bool ok = true;
+        for (int k = 0; k < 4 && ok; ++k) {
+            const int v = c.vertices[k];
+            const std::vector<EdgeLabel>& lab = rel.at[v];
+            ok = vertexRuleHolds(static_cast<int>(lab.size()), [&](int i) {
+                for (const auto& [w, j] : c.rimDarts)
+                    if (w == v && j == i) return turned(lab[i], t);
+                return lab[i];
+            });
+        }
+        if (ok) return t;
     }
-    return ok;
+    return std::nullopt;
+}
+
+bool flip(const ExtendedGraph& x, RegularEdgeLabeling& rel, const FourCycle& c, Turn turn) {
+    if (flipSense(x, rel, c) != turn) return false;
+    for (const auto& [v, i] : c.insideDarts) rel.at[v][i] = turned(rel.at[v][i], turn);
+    return true;
 }
 
 RegularEdgeLabeling minimalLabeling(const ExtendedGraph& x, RegularEdgeLabeling rel,
@@ -163,24 +181,55 @@ RegularEdgeLabeling minimalLabeling(const ExtendedGraph& x, RegularEdgeLabeling 
 LabelingEnumerator::LabelingEnumerator(const ExtendedGraph& x, const RegularEdgeLabeling& any,
                                        std::uint32_t seed)
     : x_(x), cycles_(fourCycles(x)) {
-    order_.resize(cycles_.size());
-    std::iota(order_.begin(), order_.end(), 0);
+    const int m = static_cast<int>(cycles_.size());
+    byRank_.resize(m);
+    std::iota(byRank_.begin(), byRank_.end(), 0);
     if (seed != 0) {
         std::mt19937 rng(seed);
-        std::shuffle(order_.begin(), order_.end(), rng);
+        std::shuffle(byRank_.begin(), byRank_.end(), rng);
     }
-    current_ = minimalLabeling(x, any, cycles_);
-}
-
-int LabelingEnumerator::firstDownFlippable(const RegularEdgeLabeling& rel) const {
-    RegularEdgeLabeling& probe = const_cast<RegularEdgeLabeling&>(rel);
-    for (int ci : order_) {
-        if (flip(x_, probe, cycles_[ci], Turn::Down)) {
-            flip(x_, probe, cycles_[ci], Turn::Up);
-            return ci;
+    rank_.resize(m);
+    for (int r = 0; r < m; ++r) rank_[byRank_[r]] = r;
+    // A cycle's flip sense reads its four boundary edges and the darts inside
+    // it at its own vertices; index the cycles by those darts.
+    dartBase_.assign(x.graph.vertexCount() + 1, 0);
+    for (int v = 0; v < x.graph.vertexCount(); ++v) dartBase_[v + 1] = dartBase_[v] + x.graph.degree(v);
+    cyclesAt_.resize(dartBase_.back());
+    for (int c = 0; c < m; ++c) {
+        const FourCycle& fc = cycles_[c];
+        for (const auto& [v, i] : fc.rimDarts) cyclesAt_[dartBase_[v] + i].push_back(c);
+        for (int k = 0; k < 4; ++k) {
+            const int a = fc.vertices[k], b = fc.vertices[(k + 1) % 4];
+            cyclesAt_[dartBase_[a] + x.graph.position(a, b)].push_back(c);
         }
     }
-    return -1;
+    stamp_.assign(m, 0);
+    current_ = any;
+    sense_.assign(m, std::nullopt);
+    for (int c = 0; c < m; ++c) refresh(c);
+    // Down to the minimal labeling.
+    while (!downRanks_.empty()) apply(byRank_[*downRanks_.begin()], Turn::Down);
+}
+
+void LabelingEnumerator::refresh(int ci) {
+    const int r = rank_[ci];
+    if (sense_[ci] == Turn::Up) upRanks_.erase(r);
+    if (sense_[ci] == Turn::Down) downRanks_.erase(r);
+    sense_[ci] = flipSense(x_, current_, cycles_[ci]);
+    if (sense_[ci] == Turn::Up) upRanks_.insert(r);
+    if (sense_[ci] == Turn::Down) downRanks_.insert(r);
+}
+
+void LabelingEnumerator::apply(int ci, Turn t) {
+    const FourCycle& c = cycles_[ci];
+    for (const auto& [v, i] : c.insideDarts) current_.at[v][i] = turned(current_.at[v][i], t);
+    ++clock_;
+    for (const auto& [v, i] : c.insideDarts)
+        for (int other : cyclesAt_[dartBase_[v] + i])
+            if (stamp_[other] != clock_) {
+                stamp_[other] = clock_;
+                refresh(other);
+            }
 }
 
 const RegularEdgeLabeling* LabelingEnumerator::next() {
@@ -191,20 +240,23 @@ const RegularEdgeLabeling* LabelingEnumerator::next() {
         return &current_;
     }
     while (!stack_.empty()) {
-        Frame& top = stack_.back();
-        while (top.nextChild < static_cast<int>(order_.size())) {
-            const int ci = order_[top.nextChild++];
-            if (!flip(x_, current_, cycles_[ci], Turn::Up)) continue;
-            if (firstDownFlippable(current_) == ci) {
+        for (auto it = upRanks_.lower_bound(stack_.back().nextRank); it != upRanks_.end();
+             it = upRanks_.lower_bound(stack_.back().nextRank)) {
+            const int r = *it;
+            stack_.back().nextRank = r + 1;
+            const int ci = byRank_[r];
+            apply(ci, Turn::Up);
+            // A child exactly when flipping this cycle back is its first down-move.
+            if (*downRanks_.begin() == r) {
                 stack_.push_back({ci, 0});
                 ++listed_;
                 return &current_;
             }
-            flip(x_, current_, cycles_[ci], Turn::Down);
+            apply(ci, Turn::Down);
         }
-        const int undo = top.flippedUp;
+        const int undo = stack_.back().flippedUp;
         stack_.pop_back();
-        if (undo >= 0) flip(x_, current_, cycles_[undo], Turn::Down);
+        if (undo >= 0) apply(undo, Turn::Down);
     }
     return nullptr;
 }

@@ -23,6 +23,7 @@
 #include <array>
 #include <cstdint>
 #include <optional>
+#include <set>
 #include <vector>
 
 namespace abut {
@@ -30,9 +31,11 @@ namespace abut {
 // A 4-cycle of the extended graph with something inside it, and the edges
 // inside, as darts (vertex, rotation index) — both ends of each edge listed.
 struct FourCycle {
-    std::array<int, 4> vertices{};
+    std::array<int, 4> vertices{}; // in order around the cycle
+    bool insideOnLeft = true;       // walking vertices[0] → [1] → [2], the inside is on the left
     std::vector<std::pair<int, int>> insideDarts;
     std::vector<int> touched; // vertices whose local rules a flip can change
+    std::vector<std::pair<int, int>> rimDarts; // the inside darts at the four cycle vertices
 };
 
 // All 4-cycles that avoid the poles and enclose at least one edge.
@@ -43,8 +46,13 @@ enum class Turn { Up, Down }; // counter-clockwise / clockwise quarter turn insi
 
 bool isAlternating(const ExtendedGraph& x, const RegularEdgeLabeling& rel, const FourCycle& c);
 
-// Flips `c` in the given sense if that yields a valid labeling (checked at the
-// touched vertices only); returns whether it did. O(interior of c).
+// The sense in which an alternating cycle can be flipped (exactly one can).
+// A quarter turn keeps every vertex inside valid, so only the four cycle
+// vertices decide. O(degrees of the cycle vertices); nullopt if not alternating.
+std::optional<Turn> flipSense(const ExtendedGraph& x, const RegularEdgeLabeling& rel, const FourCycle& c);
+
+// Flips `c` in the given sense if that is its flip sense; returns whether it
+// did. O(interior of c).
 bool flip(const ExtendedGraph& x, RegularEdgeLabeling& rel, const FourCycle& c, Turn turn);
 
 // The minimal labeling: flipped down until no cycle can be.
@@ -62,15 +70,25 @@ public:
     std::uint64_t listed() const { return listed_; }
 
 private:
-    int firstDownFlippable(const RegularEdgeLabeling& rel) const;
+    // Flips cycle `ci` (its sense must be `t`) and refreshes the cached sense
+    // of every cycle through a vertex whose labels changed.
+    void apply(int ci, Turn t);
+    void refresh(int ci);
 
     const ExtendedGraph& x_;
     std::vector<FourCycle> cycles_;
-    std::vector<int> order_; // cycle indices in trial order
+    std::vector<int> rank_;                    // cycle → position in trial order
+    std::vector<int> byRank_;                  // position → cycle
+    std::vector<int> dartBase_;                // vertex → index of its first dart
+    std::vector<std::vector<int>> cyclesAt_;   // dart → cycles whose flip sense reads it
+    std::vector<std::uint64_t> stamp_;         // per cycle: last refresh round
+    std::uint64_t clock_ = 0;
+    std::vector<std::optional<Turn>> sense_;   // cached flipSense per cycle
+    std::set<int> upRanks_, downRanks_;        // positions of up-/down-flippable cycles
     RegularEdgeLabeling current_;
     struct Frame {
         int flippedUp;  // cycle flipped up to reach this node (-1 at the root)
-        int nextChild;  // position in order_ of the next cycle to try
+        int nextRank;   // next position to try for a child
     };
     std::vector<Frame> stack_;
     bool started_ = false;

@@ -29,6 +29,7 @@ struct PlanVariant {
     std::vector<Rect> spaces; // spare spaces
     std::vector<int> dropped; // brief adjacency indices not realised (door walls too short included)
     std::vector<int> unmetFacade; // rooms that miss a facade side they wish for
+    bool oneSided = false;        // area-universal: any area targets can be met exactly
     PlanMetrics metrics;
     // The combinatorial layout the rectangles come from (for sizing and dragging).
     ExtendedGraph extended;
@@ -53,6 +54,8 @@ struct PlanOptions {
     double anyWall = 0.3;            // m: shortest wall that counts as a contact
     double spareMinimum = 0.3;       // m: smallest side of a spare space
     int cornerTrials = 40;           // corner assignments tried per brief
+    int labelingsPerGraph = 24;      // labelings tried per extended graph
+    int layoutBudget = 600;          // variants laid out at most, over all graphs
 };
 
 } // namespace abut

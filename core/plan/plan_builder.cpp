@@ -1,5 +1,7 @@
 #include "plan/plan_builder.h"
 
+#include "label/labeling_lattice.h"
+
 #include <algorithm>
 #include <cmath>
 
@@ -69,7 +71,7 @@ PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const Regu
         lo = hi;
         hi *= 2.0;
     }
-    for (int i = 0; i < 50 && fits(layoutAt(lo)); ++i) {
+    for (int i = 0; i < 30 && fits(layoutAt(lo)); ++i) {
         const double mid = 0.5 * (lo + hi);
         (fits(layoutAt(mid)) ? lo : hi) = mid;
     }
@@ -192,6 +194,10 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
         const int trials = std::min<int>(options.cornerTrials, static_cast<int>(aug.frame.corners.size()));
         for (int c = 0; c < trials; ++c) graphs.push_back(extendFrame(aug.frame, ids, aug.frame.corners[c]));
     }
+    // Labelings of each graph, alternating between graphs so that a small
+    // budget still samples every corner assignment.
+    const int perGraph = std::max(1, std::min(options.labelingsPerGraph,
+                                              options.layoutBudget / static_cast<int>(graphs.size())));
     for (const ExtendedGraph& x : graphs) {
         const LabelingResult r = computeRegularEdgeLabeling(x);
         const LabelingCheck c = r.status == LabelingStatus::Ok ? checkRegularEdgeLabeling(x, r.labeling)
@@ -201,18 +207,40 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
             plan.summary = "Internal error: no regular edge labeling (" + c.problem + "). Please report this brief.";
             return plan;
         }
-        PlanVariant v = layoutVariant(brief, x, r.labeling, options);
-        const std::string problem = checkVariant(brief, plan.footprint, v);
-        if (!problem.empty()) {
-            plan.status = PlanStatus::Internal;
-            plan.summary = "Internal error: the plan failed its check (" + problem + "). Please report this brief.";
-            return plan;
+        LabelingEnumerator labelings(x, r.labeling, options.seed);
+        for (int k = 0; k < perGraph; ++k) {
+            const RegularEdgeLabeling* rel = labelings.next();
+            if (!rel) break;
+            PlanVariant v = layoutVariant(brief, x, *rel, options);
+            const std::string problem = checkVariant(brief, plan.footprint, v);
+            if (!problem.empty()) {
+                plan.status = PlanStatus::Internal;
+                plan.summary = "Internal error: the plan failed its check (" + problem + "). Please report this brief.";
+                return plan;
+            }
+            v.oneSided = isOneSided(x, *rel);
+            plan.variants.push_back(std::move(v));
         }
-        plan.variants.push_back(std::move(v));
     }
     std::stable_sort(plan.variants.begin(), plan.variants.end(),
                      [](const PlanVariant& a, const PlanVariant& b) { return a.score < b.score; });
-    if (static_cast<int>(plan.variants.size()) > options.variants) plan.variants.resize(options.variants);
+    // The same rectangles reached twice (two labelings of graphs that differ
+    // only by an added contact can coincide) count once.
+    auto same = [](const PlanVariant& a, const PlanVariant& b) {
+        if (a.rooms.size() != b.rooms.size() || a.spaces.size() != b.spaces.size()) return false;
+        for (std::size_t i = 0; i < a.rooms.size(); ++i)
+            if (std::abs(a.rooms[i].x0 - b.rooms[i].x0) > 1e-6 || std::abs(a.rooms[i].y0 - b.rooms[i].y0) > 1e-6 ||
+                std::abs(a.rooms[i].x1 - b.rooms[i].x1) > 1e-6 || std::abs(a.rooms[i].y1 - b.rooms[i].y1) > 1e-6)
+                return false;
+        return true;
+    };
+    std::vector<PlanVariant> kept;
+    for (PlanVariant& v : plan.variants) {
+        if (static_cast<int>(kept.size()) >= options.variants) break;
+        if (std::none_of(kept.begin(), kept.end(), [&](const PlanVariant& k) { return same(k, v); }))
+            kept.push_back(std::move(v));
+    }
+    plan.variants = std::move(kept);
     for (std::size_t i = 0; i < plan.variants.size(); ++i) plan.variants[i].rank = static_cast<int>(i) + 1;
     const PlanVariant& v = plan.variants.front();
     bool mustLost = !v.unmetFacade.empty();

@@ -3,10 +3,12 @@
 //   abut_bench pipeline   extended graph → labeling → dual, against Boost's
 //                         Boyer–Myrvold planarity test on the same graph
 //   abut_bench augment    brief → extended graph
+//   abut_bench labelings  enumeration speed against one checker pass
 // Targets (not enforced here): linear scaling, and the pipeline at most 3× the
 // planarity test.
 #include "augment/augment.h"
 #include "dual/rectangular_dual.h"
+#include "label/labeling_lattice.h"
 #include "label/regular_edge_labeling.h"
 #include "../support/random_briefs.h"
 #include "../support/random_tilings.h"
@@ -82,11 +84,35 @@ void augment() {
     }
 }
 
+// Labelings per second on extended graphs of random tilings, and the time
+// per labeling against one O(m) checker pass on the same graph (target: well
+// below 1, i.e. amortised cost below linear).
+void labelings() {
+    for (int n : {20, 50, 200}) {
+        std::mt19937 rng(100 + n);
+        const auto rects = abut::testing::randomSlicing(n, 100.0, 100.0, rng);
+        const ExtendedGraph x = abut::testing::extendedGraphOfTiling(rects, 100.0, 100.0);
+        const RegularEdgeLabeling first = computeRegularEdgeLabeling(x).labeling;
+        const std::uint64_t cap = 20000;
+        std::uint64_t listed = 0;
+        const double t = bestOf(3, [&] {
+            LabelingEnumerator e(x, first);
+            listed = 0;
+            while (listed < cap && e.next()) ++listed;
+        });
+        const double check = bestOf(20, [&] { checkRegularEdgeLabeling(x, first); });
+        std::printf("labelings_listed_n%d: %llu count\n", n, static_cast<unsigned long long>(listed));
+        std::printf("labelings_per_second_n%d: %.0f 1/s\n", n, listed / t);
+        std::printf("labeling_time_over_check_n%d: %.2f x\n", n, (t / listed) / check);
+    }
+}
+
 } // namespace
 
 int main(int argc, char** argv) {
     const std::string only = argc > 1 ? argv[1] : "";
     if (only.empty() || only == "pipeline") pipeline();
     if (only.empty() || only == "augment") augment();
+    if (only.empty() || only == "labelings") labelings();
     return 0;
 }
