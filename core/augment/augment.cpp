@@ -94,6 +94,7 @@ private:
     }
 
     PlaneGraph embedDroppingCrossings();
+    bool embedWithFacades(const std::vector<std::pair<int, int>>& edges, PlaneGraph& out) const;
     void reportAddedContacts(const std::vector<Edge>& added, const char* why);
     std::vector<int> chooseOuterFace(const PlaneGraph& g) const;
     void bringWishingPendantsOut(PlaneGraph& g) const;
@@ -131,6 +132,10 @@ PlaneGraph Builder::embedDroppingCrossings() {
         EmbeddingResult e = embedPlanar(n_, edges, sketch_);
         if (e.status == EmbeddingStatus::Planar) {
             result_.embeddingFromSketch = e.fromSketch;
+            if (!e.fromSketch) {
+                PlaneGraph guided;
+                if (embedWithFacades(edges, guided)) return guided;
+            }
             return std::move(e.graph);
         }
         // Name the conflict, then give up its cheapest adjacency and retry.
@@ -165,6 +170,42 @@ PlaneGraph Builder::embedDroppingCrossings() {
         edges.erase(edges.begin() + cheapest);
         edgeAdj.erase(edgeAdj.begin() + cheapest);
     }
+}
+
+// A planar graph can have several embeddings; pick one that puts the rooms
+// with facade wishes around the outside, in the order of their sides: embed
+// the rooms together with four pole vertices (a cycle N–E–S–W, each joined to
+// the rooms that wish its side, and a hub joined to all four to keep them
+// outside), then drop the helpers. Returns false when that graph is not
+// planar (the wishes conflict; the plain embedding is used).
+bool Builder::embedWithFacades(const std::vector<std::pair<int, int>>& edges, PlaneGraph& out) const {
+    bool anyWish = false;
+    for (const FacadeWish& w : wishes_) anyWish = anyWish || w.sides;
+    if (!anyWish) return false;
+    const int hub = n_ + 4;
+    std::vector<std::pair<int, int>> all = edges;
+    for (int s = 0; s < 4; ++s) {
+        all.emplace_back(n_ + s, n_ + (s + 1) % 4);
+        all.emplace_back(n_ + s, hub);
+    }
+    for (int v = 0; v < n_; ++v)
+        for (Side s : allSides)
+            if (wishes_[v].has(s)) all.emplace_back(v, n_ + static_cast<int>(s));
+    const EmbeddingResult e = embedPlanar(n_ + 5, all);
+    if (e.status != EmbeddingStatus::Planar) return false;
+    // Boyer–Myrvold may return the mirror image; the sides must run N, E, S,
+    // W clockwise, i.e. the hub lies to the left of the dart N → E.
+    const bool mirrored = e.graph.nextOnFace(n_, n_ + 1) != hub;
+    out = PlaneGraph(n_);
+    for (int v = 0; v < n_; ++v) {
+        std::vector<int> rot;
+        for (int u : e.graph.neighbours(v))
+            if (u < n_) rot.push_back(u);
+        if (mirrored) std::reverse(rot.begin(), rot.end());
+        out.setRotation(v, rot);
+    }
+    out.rebuildEdgeSet();
+    return true;
 }
 
 void Builder::reportAddedContacts(const std::vector<Edge>& added, const char* why) {
@@ -591,7 +632,7 @@ void Builder::finish() {
 } // namespace
 
 ExtendedGraph extendFrame(const OuterFrame& frame, const std::vector<std::string>& roomIds,
-                          const CornerAssignment& corners, TriangulationReport* report) {
+                          const CornerAssignment& corners, TriangulationReport* report, unsigned seed) {
     ExtendedGraph x;
     x.roomCount = static_cast<int>(roomIds.size());
     x.graph = frame.graph;
@@ -625,7 +666,8 @@ ExtendedGraph extendFrame(const OuterFrame& frame, const std::vector<std::string
     }
     TriangulationReport local;
     TriangulationReport& rep = report ? *report : local;
-    rep = triangulateInnerFaces(g, R + 0, R + 1);
+    std::mt19937 rng(seed);
+    rep = triangulateInnerFaces(g, R + 0, R + 1, seed ? &rng : nullptr);
     nameVertices(x, roomIds);
     return x;
 }

@@ -60,9 +60,12 @@ struct AugmentResult {
 AugmentResult buildExtendedGraph(const Brief& brief, const AugmentOptions& options = {});
 
 // Poles and triangulation for one corner assignment of a prepared frame.
-// `report` (optional) receives the added contacts and spare spaces.
+// `report` (optional) receives the added contacts and spare spaces; a
+// non-zero `seed` draws the added contacts at random among the safe ones
+// (an alternative augmentation).
 struct TriangulationReport;
 ExtendedGraph extendFrame(const OuterFrame& frame, const std::vector<std::string>& roomIds,
-                          const CornerAssignment& corners, TriangulationReport* report = nullptr);
+                          const CornerAssignment& corners, TriangulationReport* report = nullptr,
+                          unsigned seed = 0);
 
 } // namespace abut

@@ -91,7 +91,8 @@ void addSpares(PlaneGraph& g, const std::vector<int>& f, TriangulationReport& re
 
 } // namespace
 
-void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationReport& report) {
+void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationReport& report,
+                     std::mt19937* rng) {
     std::vector<std::vector<int>> stack{face};
     while (!stack.empty()) {
         std::vector<int> f = std::move(stack.back());
@@ -99,17 +100,17 @@ void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationR
         const int k = static_cast<int>(f.size());
         if (k <= 3) continue;
         int ci = -1, cj = -1;
-        for (int i = 0; i < k && ci < 0; ++i)
-            if (safeChord(g, f, i, (i + 2) % k)) {
-                ci = i;
-                cj = (i + 2) % k;
-            }
-        for (int i = 0; i < k && ci < 0; ++i)
-            for (int d = 3; d <= k - 3 && ci < 0; ++d)
-                if (safeChord(g, f, i, (i + d) % k)) {
-                    ci = i;
-                    cj = (i + d) % k;
-                }
+        std::vector<std::pair<int, int>> safe;
+        for (int i = 0; i < k && (rng || safe.empty()); ++i)
+            if (safeChord(g, f, i, (i + 2) % k)) safe.emplace_back(i, (i + 2) % k);
+        for (int i = 0; i < k && safe.empty(); ++i)
+            for (int d = 3; d <= k - 3 && safe.empty(); ++d)
+                if (safeChord(g, f, i, (i + d) % k)) safe.emplace_back(i, (i + d) % k);
+        if (!safe.empty()) {
+            const std::size_t pick = rng ? std::uniform_int_distribution<std::size_t>(0, safe.size() - 1)(*rng) : 0;
+            ci = safe[pick].first;
+            cj = safe[pick].second;
+        }
         if (ci < 0) {
             addSpares(g, f, report);
             continue;
@@ -131,7 +132,7 @@ void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationR
     }
 }
 
-TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int outerTo) {
+TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int outerTo, std::mt19937* rng) {
     TriangulationReport report;
     const std::vector<int> outer = g.faceOf(outerFrom, outerTo);
     for (const std::vector<int>& f : g.faces()) {
@@ -145,7 +146,7 @@ TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int oute
                 if (r == outer) continue;
             }
         }
-        triangulateFace(g, f, report);
+        triangulateFace(g, f, report, rng);
     }
     return report;
 }

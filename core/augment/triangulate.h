@@ -15,6 +15,7 @@
 
 #include "graph/plane_graph.h"
 
+#include <random>
 #include <utility>
 #include <vector>
 
@@ -25,10 +26,14 @@ struct TriangulationReport {
     std::vector<int> spares;                      // new dummy vertices
 };
 
-// Triangulates the face `face`, appending to `report`.
-void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationReport& report);
+// Triangulates the face `face`, appending to `report`. With `rng`, the safe
+// chord is drawn at random among the safe ones (ears still first), which
+// gives alternative augmentations; without, the first one is taken.
+void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationReport& report,
+                     std::mt19937* rng = nullptr);
 
 // Triangulates every face except the one traced from dart outerFrom → outerTo.
-TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int outerTo);
+TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int outerTo,
+                                          std::mt19937* rng = nullptr);
 
 } // namespace abut

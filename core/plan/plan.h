@@ -7,6 +7,7 @@
 #include "diagnostics.h"
 #include "dual/rectangular_dual.h"
 #include "label/regular_edge_labeling.h"
+#include "size/segment_sizing.h"
 
 #include <string>
 #include <vector>
@@ -30,6 +31,8 @@ struct PlanVariant {
     std::vector<int> dropped; // brief adjacency indices not realised (door walls too short included)
     std::vector<int> unmetFacade; // rooms that miss a facade side they wish for
     bool oneSided = false;        // area-universal: any area targets can be met exactly
+    bool sized = false;           // segment positions chosen by the sizer (not just fitted)
+    std::vector<UnmetRequirement> unmet; // what the sizer could not meet, and by how much
     PlanMetrics metrics;
     // The combinatorial layout the rectangles come from (for sizing and dragging).
     ExtendedGraph extended;
@@ -51,11 +54,26 @@ struct Plan {
 struct PlanOptions {
     int variants = 10;               // how many to keep
     unsigned seed = 1;               // for choices that are made at random
-    double anyWall = 0.3;            // m: shortest wall that counts as a contact
+    double anyWall = 0.05;           // m: shortest wall that counts as a contact (any positive length, kept visible)
     double spareMinimum = 0.3;       // m: smallest side of a spare space
     int cornerTrials = 40;           // corner assignments tried per brief
+    int augmentations = 4;           // triangulations tried per corner assignment (1 = the first only)
     int labelingsPerGraph = 24;      // labelings tried per extended graph
     int layoutBudget = 600;          // variants laid out at most, over all graphs
+    int sizedCandidates = 30;        // best fitted variants that are then sized
+    int improvedCandidates = 1;      // best sized variants then improved by labeling flips
+    int flipBudget = 0;              // sizings per improved variant (0 = 40 + 2 per room)
+    double grid = 0.0;               // m: planning module for walls (0 = none)
 };
+
+// Score of a variant (lower is better), documented for planners:
+//   worst relative area error + 0.25 × mean relative area error
+//   + 1.0 per dropped 'must' adjacency + 0.2 per dropped 'should' adjacency
+//   + 0.5 per room missing a facade it wishes for
+//   + 0.1 × Σ (aspect − maxAspect) over rooms more elongated than allowed
+//   + 0.5 per room narrower than its minimum width
+//   + 0.2 × spare-space share of the footprint
+//   + 0.01 × interior wall length / √(footprint area)   (less wall, less cost)
+double variantScore(const Brief& brief, const Footprint& footprint, const PlanVariant& v);
 
 } // namespace abut

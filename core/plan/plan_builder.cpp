@@ -4,6 +4,8 @@
 
 #include <algorithm>
 #include <cmath>
+#include <numeric>
+#include <random>
 
 namespace abut {
 
@@ -28,6 +30,103 @@ double sharedWall(const Rect& a, const Rect& b, double tol = 1e-9) {
 }
 
 } // namespace
+
+
+namespace {
+
+// The hard minimum extents the sizer keeps, as longest-path weights.
+DualWeights hardMinimums(const Brief& brief, const ExtendedGraph& x, const SegmentStructure& segs,
+                         const SizingOptions& o) {
+    DualWeights w;
+    const int n = x.graph.vertexCount();
+    w.minWidth.assign(n, 1e-3);
+    w.minDepth.assign(n, 1e-3);
+    for (int v = 0; v < n; ++v) {
+        if (x.isRoom(v)) w.minWidth[v] = w.minDepth[v] = std::max(1e-3, brief.rooms[v].minWidth.value_or(0.0));
+        else if (x.isSpare(v)) w.minWidth[v] = w.minDepth[v] = o.spareMinimum;
+    }
+    w.anyWall = o.anyWall;
+    w.minWall.assign(segs.walls.size(), 0.0);
+    for (std::size_t i = 0; i < segs.walls.size(); ++i) {
+        const auto& wall = segs.walls[i];
+        if (!x.isRoom(wall.u) || !x.isRoom(wall.v)) continue;
+        for (const Adjacency& a : brief.adjacencies)
+            if (a.kind == AdjacencyKind::Door &&
+                std::minmax(brief.roomIndex(a.a), brief.roomIndex(a.b)) == std::minmax(wall.u, wall.v))
+                w.minWall[i] = o.doorWidth;
+    }
+    return w;
+}
+
+// Area errors, aspects, door walls, facade wishes and score of a variant whose
+// rectangles are set. Door walls shorter than doorWidth are listed as dropped.
+void updateMetrics(const Brief& brief, const Footprint& fp, const ExtendedGraph& x, PlanVariant& out) {
+    PlanMetrics m;
+    out.dropped.clear();
+    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a)
+        if (!x.graph.hasEdge(brief.roomIndex(brief.adjacencies[a].a), brief.roomIndex(brief.adjacencies[a].b)))
+            out.dropped.push_back(static_cast<int>(a));
+    double sumErr = 0;
+    for (std::size_t i = 0; i < out.rooms.size(); ++i) {
+        const Rect& r = out.rooms[i];
+        const double err = std::abs(r.area() - brief.rooms[i].area) / brief.rooms[i].area;
+        m.worstAreaError = std::max(m.worstAreaError, err);
+        sumErr += err;
+        m.worstAspect = std::max(m.worstAspect, std::max(r.width(), r.depth()) / std::min(r.width(), r.depth()));
+        if (brief.rooms[i].minWidth && std::min(r.width(), r.depth()) < *brief.rooms[i].minWidth - 1e-9)
+            ++m.narrowRooms;
+    }
+    m.meanAreaError = out.rooms.empty() ? 0 : sumErr / out.rooms.size();
+    for (const Rect& r : out.spaces) m.spareArea += r.area();
+    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
+        const Adjacency& adj = brief.adjacencies[a];
+        if (adj.kind != AdjacencyKind::Door) continue;
+        if (std::count(out.dropped.begin(), out.dropped.end(), static_cast<int>(a))) continue;
+        const double wall = sharedWall(out.rooms[brief.roomIndex(adj.a)], out.rooms[brief.roomIndex(adj.b)]);
+        if (wall < brief.doorWidth - 1e-9) {
+            ++m.shortDoorWalls;
+            out.dropped.push_back(static_cast<int>(a));
+        }
+    }
+    std::sort(out.dropped.begin(), out.dropped.end());
+    out.unmetFacade.clear();
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
+        const FacadeWish& wish = brief.rooms[i].facade;
+        bool met = true, any = false;
+        for (Side s : allSides) {
+            const bool touches = x.graph.hasEdge(static_cast<int>(i), x.pole(s));
+            any = any || touches;
+            if (wish.has(s)) met = met && touches;
+        }
+        if (wish.anySide) met = met && any;
+        if (!met) out.unmetFacade.push_back(static_cast<int>(i));
+    }
+    out.metrics = m;
+    out.score = variantScore(brief, fp, out);
+}
+
+} // namespace
+
+double variantScore(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
+    double score = v.metrics.worstAreaError + 0.25 * v.metrics.meanAreaError;
+    for (int d : v.dropped) score += brief.adjacencies[d].priority == Priority::Must ? 1.0 : 0.2;
+    score += 0.5 * static_cast<double>(v.unmetFacade.size());
+    for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+        const Rect& r = v.rooms[i];
+        const double aspect = std::max(r.width(), r.depth()) / std::min(r.width(), r.depth());
+        if (brief.rooms[i].maxAspect && aspect > *brief.rooms[i].maxAspect)
+            score += 0.1 * (aspect - *brief.rooms[i].maxAspect);
+    }
+    score += 0.5 * v.metrics.narrowRooms;
+    const double area = fp.width * fp.depth;
+    score += 0.2 * v.metrics.spareArea / area;
+    double walls = 0;
+    for (const Rect& r : v.rooms) walls += r.width() + r.depth();
+    for (const Rect& r : v.spaces) walls += r.width() + r.depth();
+    walls -= fp.width + fp.depth; // each interior wall is counted from both sides; the outline once
+    score += 0.01 * walls / std::sqrt(area);
+    return score;
+}
 
 PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,
                           const PlanOptions& options) {
@@ -94,48 +193,7 @@ PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const Regu
     for (Rect& r : out.rooms) snap(r);
     for (Rect& r : out.spaces) snap(r);
 
-    // Dropped: what this extended graph does not join (triangulation may put
-    // back a contact for one corner assignment and not for another).
-    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a)
-        if (!x.graph.hasEdge(brief.roomIndex(brief.adjacencies[a].a), brief.roomIndex(brief.adjacencies[a].b)))
-            out.dropped.push_back(static_cast<int>(a));
-    PlanMetrics& m = out.metrics;
-    double sumErr = 0;
-    for (std::size_t i = 0; i < out.rooms.size(); ++i) {
-        const Rect& r = out.rooms[i];
-        const double err = std::abs(r.area() - brief.rooms[i].area) / brief.rooms[i].area;
-        m.worstAreaError = std::max(m.worstAreaError, err);
-        sumErr += err;
-        m.worstAspect = std::max(m.worstAspect, std::max(r.width(), r.depth()) / std::min(r.width(), r.depth()));
-        if (brief.rooms[i].minWidth && std::min(r.width(), r.depth()) < *brief.rooms[i].minWidth - 1e-9)
-            ++m.narrowRooms;
-    }
-    m.meanAreaError = out.rooms.empty() ? 0 : sumErr / out.rooms.size();
-    for (const Rect& r : out.spaces) m.spareArea += r.area();
-    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
-        const Adjacency& adj = brief.adjacencies[a];
-        if (adj.kind != AdjacencyKind::Door) continue;
-        if (std::count(out.dropped.begin(), out.dropped.end(), static_cast<int>(a))) continue;
-        const double wall = sharedWall(out.rooms[brief.roomIndex(adj.a)], out.rooms[brief.roomIndex(adj.b)]);
-        if (wall < brief.doorWidth - 1e-9) {
-            ++m.shortDoorWalls;
-            out.dropped.push_back(static_cast<int>(a));
-        }
-    }
-    std::sort(out.dropped.begin(), out.dropped.end());
-    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
-        const FacadeWish& wish = brief.rooms[i].facade;
-        bool met = true, any = false;
-        for (Side s : allSides) {
-            const bool touches = x.graph.hasEdge(static_cast<int>(i), x.pole(s));
-            any = any || touches;
-            if (wish.has(s)) met = met && touches;
-        }
-        if (wish.anySide) met = met && any;
-        if (!met) out.unmetFacade.push_back(static_cast<int>(i));
-    }
-    out.score = m.worstAreaError + 0.2 * m.meanAreaError + 0.5 * static_cast<double>(out.dropped.size()) +
-                0.5 * static_cast<double>(out.unmetFacade.size()) + 0.05 * std::max(0.0, m.worstAspect - 2.0);
+    updateMetrics(brief, fp, x, out);
     return out;
 }
 
@@ -192,7 +250,10 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
         std::vector<std::string> ids;
         for (const Room& r : brief.rooms) ids.push_back(r.id);
         const int trials = std::min<int>(options.cornerTrials, static_cast<int>(aug.frame.corners.size()));
-        for (int c = 0; c < trials; ++c) graphs.push_back(extendFrame(aug.frame, ids, aug.frame.corners[c]));
+        for (int c = 0; c < trials; ++c)
+            for (int a = 0; a < std::max(1, options.augmentations); ++a)
+                graphs.push_back(extendFrame(aug.frame, ids, aug.frame.corners[c], nullptr,
+                                             a == 0 ? 0u : options.seed * 7919u + static_cast<unsigned>(a)));
     }
     // Labelings of each graph, alternating between graphs so that a small
     // budget still samples every corner assignment.
@@ -222,8 +283,115 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
             plan.variants.push_back(std::move(v));
         }
     }
-    std::stable_sort(plan.variants.begin(), plan.variants.end(),
-                     [](const PlanVariant& a, const PlanVariant& b) { return a.score < b.score; });
+    auto byScore = [](const PlanVariant& a, const PlanVariant& b) { return a.score < b.score; };
+    std::stable_sort(plan.variants.begin(), plan.variants.end(), byScore);
+    // Size the most promising fitted variants to their target areas.
+    SizingOptions sizing;
+    sizing.doorWidth = brief.doorWidth;
+    sizing.anyWall = options.anyWall;
+    sizing.spareMinimum = options.spareMinimum;
+    sizing.grid = options.grid;
+    const std::size_t toSize = std::min<std::size_t>(plan.variants.size(), options.sizedCandidates);
+    for (std::size_t i = 0; i < toSize; ++i) {
+        PlanVariant& v = plan.variants[i];
+        const SizingProblem problem(brief, v.extended, v.labeling, plan.footprint, sizing);
+        const SizingResult sized = problem.solve();
+        PlanVariant candidate = v;
+        candidate.rooms.clear();
+        candidate.spaces.clear();
+        for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
+            if (v.extended.isRoom(u)) candidate.rooms.push_back(sized.rects[u]);
+            else if (v.extended.isSpare(u)) candidate.spaces.push_back(sized.rects[u]);
+        }
+        updateMetrics(brief, plan.footprint, v.extended, candidate);
+        candidate.sized = true;
+        candidate.unmet = sized.unmet;
+        if (!checkVariant(brief, plan.footprint, candidate).empty()) continue; // keep the fitted one
+        v = std::move(candidate);
+    }
+    std::stable_sort(plan.variants.begin(), plan.variants.end(), byScore);
+    // Local search over the lattice: flip one alternating 4-cycle at a time
+    // and keep the flip when the sized layout gets closer to the targets.
+    const std::size_t toImprove = std::min<std::size_t>(plan.variants.size(), options.improvedCandidates);
+    const int budget = options.flipBudget > 0 ? options.flipBudget : 40 + 2 * static_cast<int>(brief.rooms.size());
+    std::mt19937 rng(options.seed);
+    for (std::size_t i = 0; i < toImprove; ++i) {
+        PlanVariant& v = plan.variants[i];
+        if (!v.sized) continue;
+        const std::vector<FourCycle> cycles = fourCycles(v.extended);
+        auto penalised = [](const SizingResult& r) {
+            // Hard minimums that had to shrink weigh most, in proportion.
+            return r.objective + 100.0 * (1.0 - r.relaxation);
+        };
+        RegularEdgeLabeling rel = v.labeling;
+        std::vector<int> order(cycles.size());
+        std::iota(order.begin(), order.end(), 0);
+        // Phase 1, cheap: make the hard minimums fit. The longest paths of
+        // minimum extents over the footprint's sides measure how far they are
+        // from fitting (≤ 1 fits); flips that shrink it are kept.
+        auto overfill = [&](const RegularEdgeLabeling& l) {
+            const SegmentStructure segs = maximalSegments(v.extended, l);
+            DualWeights w = hardMinimums(brief, v.extended, segs, sizing);
+            const DualLayout lay = longestPathLayout(v.extended, segs, w);
+            return std::max(lay.width / plan.footprint.width, lay.depth / plan.footprint.depth);
+        };
+        double fill = overfill(rel);
+        const int cheapBudget = 10 * budget;
+        int cheap = 0;
+        for (bool improved = fill > 1.0; improved && cheap < cheapBudget;) {
+            improved = false;
+            std::shuffle(order.begin(), order.end(), rng);
+            for (int c : order) {
+                if (cheap >= cheapBudget) break;
+                const std::optional<Turn> sense = flipSense(v.extended, rel, cycles[c]);
+                if (!sense) continue;
+                flip(v.extended, rel, cycles[c], *sense);
+                ++cheap;
+                const double f = overfill(rel);
+                if (f < fill - 1e-12) {
+                    fill = f;
+                    improved = fill > 1.0;
+                    break;
+                }
+                flip(v.extended, rel, cycles[c], *sense == Turn::Up ? Turn::Down : Turn::Up);
+            }
+        }
+        // Phase 2: size each flip and keep those that bring areas closer.
+        SizingResult best = SizingProblem(brief, v.extended, rel, plan.footprint, sizing).solve();
+        int evaluations = 0;
+        for (bool improved = true; improved && evaluations < budget;) {
+            improved = false;
+            std::shuffle(order.begin(), order.end(), rng);
+            for (int c : order) {
+                if (evaluations >= budget) break;
+                const std::optional<Turn> sense = flipSense(v.extended, rel, cycles[c]);
+                if (!sense) continue;
+                RegularEdgeLabeling trial = rel;
+                flip(v.extended, trial, cycles[c], *sense);
+                const SizingResult r = SizingProblem(brief, v.extended, trial, plan.footprint, sizing).solve();
+                ++evaluations;
+                if (penalised(r) < penalised(best) - 1e-12) {
+                    best = r;
+                    rel = std::move(trial);
+                    improved = true;
+                    break;
+                }
+            }
+        }
+        PlanVariant candidate = v;
+        candidate.labeling = rel;
+        candidate.rooms.clear();
+        candidate.spaces.clear();
+        for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
+            if (v.extended.isRoom(u)) candidate.rooms.push_back(best.rects[u]);
+            else if (v.extended.isSpare(u)) candidate.spaces.push_back(best.rects[u]);
+        }
+        updateMetrics(brief, plan.footprint, v.extended, candidate);
+        candidate.unmet = best.unmet;
+        candidate.oneSided = isOneSided(v.extended, rel);
+        if (checkVariant(brief, plan.footprint, candidate).empty() && candidate.score <= v.score) v = std::move(candidate);
+    }
+    std::stable_sort(plan.variants.begin(), plan.variants.end(), byScore);
     // The same rectangles reached twice (two labelings of graphs that differ
     // only by an added contact can coincide) count once.
     auto same = [](const PlanVariant& a, const PlanVariant& b) {

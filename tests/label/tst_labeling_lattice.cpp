@@ -67,34 +67,6 @@ std::vector<std::vector<Rect>> genericTilings(int w, int h, int n) {
     return out;
 }
 
-// The labeling read off the rectangles: a west room points blue to its east
-// neighbour, a lower room red to the one above.
-RegularEdgeLabeling labelingOfTiling(const ExtendedGraph& x, const std::vector<Rect>& r) {
-    RegularEdgeLabeling rel;
-    const PlaneGraph& g = x.graph;
-    rel.at.resize(g.vertexCount());
-    for (int v = 0; v < g.vertexCount(); ++v) {
-        for (int u : g.neighbours(v)) {
-            EdgeLabel l = EdgeLabel::Outer;
-            if (x.isPole(v) && x.isPole(u)) l = EdgeLabel::Outer;
-            else if (v == x.pole(Side::N)) l = EdgeLabel::InRed;
-            else if (v == x.pole(Side::S)) l = EdgeLabel::OutRed;
-            else if (v == x.pole(Side::W)) l = EdgeLabel::OutBlue;
-            else if (v == x.pole(Side::E)) l = EdgeLabel::InBlue;
-            else if (u == x.pole(Side::N)) l = EdgeLabel::OutRed;
-            else if (u == x.pole(Side::S)) l = EdgeLabel::InRed;
-            else if (u == x.pole(Side::W)) l = EdgeLabel::InBlue;
-            else if (u == x.pole(Side::E)) l = EdgeLabel::OutBlue;
-            else if (r[v].x1 == r[u].x0) l = EdgeLabel::OutBlue;
-            else if (r[v].x0 == r[u].x1) l = EdgeLabel::InBlue;
-            else if (r[v].y1 == r[u].y0) l = EdgeLabel::OutRed;
-            else l = EdgeLabel::InRed;
-            rel.at[v].push_back(l);
-        }
-    }
-    return rel;
-}
-
 // Canonical code of a plane graph rooted at the dart N → E (and of its
 // labeling, when given): vertices numbered in breadth-first order, each
 // rotation read from the dart it was reached by.
@@ -163,7 +135,7 @@ void TestLabelingLattice::countsMatchOeis() {
         for (const auto& rects : genericTilings(w, h, n)) {
             const ExtendedGraph x = abut::testing::extendedGraphOfTiling(rects, w, h);
             QVERIFY(checkExtendedGraph(x).ok);
-            const RegularEdgeLabeling rel = labelingOfTiling(x, rects);
+            const RegularEdgeLabeling rel = abut::testing::labelingOfTiling(x, rects);
             QVERIFY(checkRegularEdgeLabeling(x, rel).ok);
             const auto key = canonicalCode(x, nullptr);
             rectangulations[key].insert(canonicalCode(x, &rel));
@@ -282,7 +254,7 @@ void TestLabelingLattice::oneSidedLayouts() {
                 }
                 if (!clean) continue;
                 const ExtendedGraph x = abut::testing::extendedGraphOfTiling(rects, w, h);
-                QCOMPARE(isOneSided(x, labelingOfTiling(x, rects)), oneSided);
+                QCOMPARE(isOneSided(x, abut::testing::labelingOfTiling(x, rects)), oneSided);
                 ++compared;
             }
         }

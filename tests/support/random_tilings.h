@@ -6,6 +6,7 @@
 
 #include "augment/extended_graph.h"
 #include "dual/rectangular_dual.h"
+#include "label/regular_edge_labeling.h"
 
 #include <algorithm>
 #include <map>
@@ -116,6 +117,34 @@ inline ExtendedGraph extendedGraphOfTiling(const std::vector<Rect>& rects, doubl
     for (int v = 0; v < n; ++v) ids.push_back("t" + std::to_string(v));
     nameVertices(x, ids);
     return x;
+}
+
+// The labeling read off the rectangles: a west room points blue to its east
+// neighbour, a lower room red to the one above.
+inline RegularEdgeLabeling labelingOfTiling(const ExtendedGraph& x, const std::vector<Rect>& r) {
+    RegularEdgeLabeling rel;
+    const PlaneGraph& g = x.graph;
+    rel.at.resize(g.vertexCount());
+    for (int v = 0; v < g.vertexCount(); ++v) {
+        for (int u : g.neighbours(v)) {
+            EdgeLabel l = EdgeLabel::Outer;
+            if (x.isPole(v) && x.isPole(u)) l = EdgeLabel::Outer;
+            else if (v == x.pole(Side::N)) l = EdgeLabel::InRed;
+            else if (v == x.pole(Side::S)) l = EdgeLabel::OutRed;
+            else if (v == x.pole(Side::W)) l = EdgeLabel::OutBlue;
+            else if (v == x.pole(Side::E)) l = EdgeLabel::InBlue;
+            else if (u == x.pole(Side::N)) l = EdgeLabel::OutRed;
+            else if (u == x.pole(Side::S)) l = EdgeLabel::InRed;
+            else if (u == x.pole(Side::W)) l = EdgeLabel::InBlue;
+            else if (u == x.pole(Side::E)) l = EdgeLabel::OutBlue;
+            else if (r[v].x1 == r[u].x0) l = EdgeLabel::OutBlue;
+            else if (r[v].x0 == r[u].x1) l = EdgeLabel::InBlue;
+            else if (r[v].y1 == r[u].y0) l = EdgeLabel::OutRed;
+            else l = EdgeLabel::InRed;
+            rel.at[v].push_back(l);
+        }
+    }
+    return rel;
 }
 
 } // namespace abut::testing

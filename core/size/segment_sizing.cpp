@@ -1,0 +1,391 @@
+#include "size/segment_sizing.h"
+
+#include <Eigen/Sparse>
+#include <Eigen/SparseCholesky>
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+
+namespace abut {
+
+SizingProblem::SizingProblem(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,
+                             const Footprint& footprint, const SizingOptions& options)
+    : brief_(brief), x_(x), segs_(maximalSegments(x, rel)), footprint_(footprint), options_(options) {
+    target_.resize(brief.rooms.size());
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i) target_[i] = brief.rooms[i].area;
+    wallMin_.assign(segs_.walls.size(), options.anyWall);
+    for (std::size_t i = 0; i < segs_.walls.size(); ++i) {
+        const auto& wall = segs_.walls[i];
+        if (!x.isRoom(wall.u) || !x.isRoom(wall.v)) continue;
+        for (const Adjacency& a : brief.adjacencies)
+            if (a.kind == AdjacencyKind::Door &&
+                std::minmax(brief.roomIndex(a.a), brief.roomIndex(a.b)) == std::minmax(wall.u, wall.v))
+                wallMin_[i] = std::max(wallMin_[i], options.doorWidth);
+    }
+}
+
+std::vector<SizingProblem::Gap> SizingProblem::gaps() const {
+    std::vector<Gap> out;
+    for (int v = 0; v < x_.graph.vertexCount(); ++v) {
+        if (x_.isPole(v)) continue;
+        double m = 0.0;
+        if (x_.isRoom(v)) m = brief_.rooms[v].minWidth.value_or(0.0);
+        else m = options_.spareMinimum;
+        m = std::max(m, 1e-3);
+        out.push_back({true, segs_.west[v], segs_.east[v], m});
+        out.push_back({false, segs_.south[v], segs_.north[v], m});
+    }
+    for (std::size_t i = 0; i < segs_.walls.size(); ++i) {
+        const auto& wall = segs_.walls[i];
+        // A vertical wall runs north–south: its length is measured in y.
+        out.push_back({!wall.vertical, wall.from, wall.to, wallMin_[i]});
+    }
+    return out;
+}
+
+namespace {
+
+struct Coordinates {
+    std::vector<double> x, y;
+    double& at(bool axisX, int s) { return axisX ? x[s] : y[s]; }
+    double at(bool axisX, int s) const { return axisX ? x[s] : y[s]; }
+};
+
+double longestSpan(int count, const std::vector<std::pair<std::pair<int, int>, double>>& arcs, int from, int to,
+                   std::vector<double>& dist) {
+    // Kahn over the segment graph of one axis.
+    std::vector<std::vector<std::pair<int, double>>> out(count);
+    std::vector<int> indeg(count, 0);
+    for (const auto& [e, w] : arcs) {
+        out[e.first].emplace_back(e.second, w);
+        ++indeg[e.second];
+    }
+    dist.assign(count, 0.0);
+    std::vector<int> ready;
+    for (int i = 0; i < count; ++i)
+        if (!indeg[i]) ready.push_back(i);
+    while (!ready.empty()) {
+        const int s = ready.back();
+        ready.pop_back();
+        for (const auto& [t, w] : out[s]) {
+            dist[t] = std::max(dist[t], dist[s] + w);
+            if (--indeg[t] == 0) ready.push_back(t);
+        }
+    }
+    return dist[to] - dist[from];
+}
+
+} // namespace
+
+SizingResult SizingProblem::solve(const SizingResult* start) const {
+    const SegmentStructure& s = segs_;
+    const double W = footprint_.width, D = footprint_.depth;
+    std::vector<Gap> gap = gaps();
+    SizingResult result;
+
+    // Free variables: every segment but the outline and the locked ones.
+    std::vector<int> varX(s.verticalCount, -1), varY(s.horizontalCount, -1);
+    std::vector<char> lockX(s.verticalCount, 0), lockY(s.horizontalCount, 0);
+    for (int k : options_.lockedVertical) lockX[k] = 1;
+    for (int k : options_.lockedHorizontal) lockY[k] = 1;
+    for (int v : options_.lockedRooms) {
+        lockX[s.west[v]] = lockX[s.east[v]] = 1;
+        lockY[s.south[v]] = lockY[s.north[v]] = 1;
+    }
+    lockX[s.westSegment] = lockX[s.eastSegment] = 1;
+    lockY[s.southSegment] = lockY[s.northSegment] = 1;
+    int nv = 0;
+    for (int k = 0; k < s.verticalCount; ++k)
+        if (!lockX[k]) varX[k] = nv++;
+    for (int k = 0; k < s.horizontalCount; ++k)
+        if (!lockY[k]) varY[k] = nv++;
+
+    Coordinates c;
+    auto slack = [&](const Gap& g) { return c.at(g.vertical, g.to) - c.at(g.vertical, g.from) - g.min; };
+    auto strictlyFeasible = [&]() {
+        for (const Gap& g : gap)
+            if (!(slack(g) > 0)) return false;
+        return true;
+    };
+    bool warm = false;
+    if (start && start->x.size() == static_cast<std::size_t>(s.verticalCount) &&
+        start->y.size() == static_cast<std::size_t>(s.horizontalCount)) {
+        c.x = start->x;
+        c.y = start->y;
+        warm = strictlyFeasible();
+    }
+    if (!warm) {
+        // Cold: longest paths of minimum gaps plus a share of each room's
+        // natural size, the share as large as fits, then stretched.
+        auto layout = [&](double t, std::vector<double>& xs, std::vector<double>& ys) {
+            std::vector<std::pair<std::pair<int, int>, double>> ax, ay;
+            for (std::size_t i = 0; i < gap.size(); ++i) {
+                const Gap& g = gap[i];
+                double w = g.min * 1.01;
+                if (i < 2 * static_cast<std::size_t>(x_.graph.vertexCount() - 4)) {
+                    const int v = static_cast<int>(i / 2) + (static_cast<int>(i / 2) >= x_.roomCount ? 4 : 0);
+                    if (x_.isRoom(v)) w = std::max(w, t * std::sqrt(target_[v]));
+                }
+                (g.vertical ? ax : ay).push_back({{g.from, g.to}, w});
+            }
+            const double sx = longestSpan(s.verticalCount, ax, s.westSegment, s.eastSegment, xs);
+            const double sy = longestSpan(s.horizontalCount, ay, s.southSegment, s.northSegment, ys);
+            return std::make_pair(sx, sy);
+        };
+        std::vector<double> xs, ys;
+        auto [mx, my] = layout(0.0, xs, ys);
+        if (mx >= W || my >= D) {
+            const double scaleMin = 0.98 * std::min(W / mx, D / my);
+            result.status = SizingStatus::Relaxed;
+            result.relaxation = scaleMin;
+            for (Gap& g : gap) g.min *= scaleMin;
+        }
+        double lo = 0.0, hi = 1.0;
+        auto fits = [&](double t) {
+            auto [a, b] = layout(t, xs, ys);
+            return a < W && b < D;
+        };
+        while (fits(hi) && hi < 1e6) {
+            lo = hi;
+            hi *= 2;
+        }
+        for (int i = 0; i < 30; ++i) {
+            const double mid = 0.5 * (lo + hi);
+            (fits(mid) ? lo : hi) = mid;
+        }
+        auto [ex, ey] = layout(0.9 * lo, xs, ys);
+        c.x.resize(s.verticalCount);
+        c.y.resize(s.horizontalCount);
+        for (int k = 0; k < s.verticalCount; ++k) c.x[k] = (xs[k] - xs[s.westSegment]) * W / ex;
+        for (int k = 0; k < s.horizontalCount; ++k) c.y[k] = (ys[k] - ys[s.southSegment]) * D / ey;
+    }
+    c.x[s.westSegment] = 0;
+    c.x[s.eastSegment] = W;
+    c.y[s.southSegment] = 0;
+    c.y[s.northSegment] = D;
+
+    // Residuals: (value, [(axisX, segment, derivative)]).
+    const int n = x_.graph.vertexCount();
+    double spareScale = 0;
+    for (double a : target_) spareScale += a;
+    spareScale = target_.empty() ? 1.0 : spareScale / target_.size();
+    struct Term { bool axisX; int seg; double d; };
+    std::vector<double> r;
+    std::vector<std::vector<Term>> J;
+    auto residuals = [&](bool withJacobian) {
+        r.clear();
+        if (withJacobian) J.clear();
+        for (int v = 0; v < n; ++v) {
+            if (x_.isPole(v)) continue;
+            const double w = c.x[s.east[v]] - c.x[s.west[v]], h = c.y[s.north[v]] - c.y[s.south[v]];
+            if (x_.isRoom(v)) {
+                const double A = target_[v];
+                r.push_back(std::log(w * h / A));
+                if (withJacobian)
+                    J.push_back({{true, s.east[v], 1.0 / w}, {true, s.west[v], -1.0 / w},
+                                 {false, s.north[v], 1.0 / h}, {false, s.south[v], -1.0 / h}});
+                const double maxAspect = brief_.rooms[v].maxAspect.value_or(0.0);
+                if (maxAspect >= 1.0) {
+                    const double g = std::sqrt(options_.aspectWeight);
+                    const bool wide = w > h;
+                    const double ratio = wide ? w / h : h / w;
+                    const double excess = std::max(0.0, ratio - maxAspect);
+                    r.push_back(g * excess);
+                    if (withJacobian) {
+                        if (excess <= 0) J.push_back({});
+                        else if (wide)
+                            J.push_back({{true, s.east[v], g / h}, {true, s.west[v], -g / h},
+                                         {false, s.north[v], -g * w / (h * h)}, {false, s.south[v], g * w / (h * h)}});
+                        else
+                            J.push_back({{false, s.north[v], g / w}, {false, s.south[v], -g / w},
+                                         {true, s.east[v], -g * h / (w * w)}, {true, s.west[v], g * h / (w * w)}});
+                    }
+                }
+            } else {
+                const double g = std::sqrt(options_.spareWeight) / spareScale;
+                r.push_back(g * w * h);
+                if (withJacobian)
+                    J.push_back({{true, s.east[v], g * h}, {true, s.west[v], -g * h},
+                                 {false, s.north[v], g * w}, {false, s.south[v], -g * w}});
+            }
+        }
+    };
+    auto objective = [&]() {
+        residuals(false);
+        double f = 0;
+        for (double q : r) f += 0.5 * q * q;
+        return f;
+    };
+    auto merit = [&](double mu) {
+        double b = 0;
+        for (const Gap& g : gap) {
+            const double sl = slack(g);
+            if (!(sl > 0)) return std::numeric_limits<double>::infinity();
+            b -= std::log(sl);
+        }
+        return objective() + mu * b;
+    };
+    auto var = [&](bool axisX, int seg) { return axisX ? varX[seg] : varY[seg]; };
+
+    if (nv > 0) {
+        Eigen::SimplicialLDLT<Eigen::SparseMatrix<double>> solver;
+        bool analysed = false;
+        const double scale = std::max(W, D);
+        double mu = warm ? 1e-9 : 1e-3;
+        double damping = 1e-6;
+        const double muEnd = 1e-11;
+        int steps = 0;
+        while (steps < options_.maxNewtonSteps) {
+            for (int inner = 0; inner < 60 && steps < options_.maxNewtonSteps; ++inner, ++steps) {
+                residuals(true);
+                std::vector<Eigen::Triplet<double>> trip;
+                Eigen::VectorXd grad = Eigen::VectorXd::Zero(nv);
+                for (std::size_t i = 0; i < r.size(); ++i) {
+                    for (const Term& a : J[i]) {
+                        const int p = var(a.axisX, a.seg);
+                        if (p < 0) continue;
+                        grad[p] += r[i] * a.d;
+                        for (const Term& b : J[i]) {
+                            const int q = var(b.axisX, b.seg);
+                            if (q >= 0) trip.emplace_back(p, q, a.d * b.d);
+                        }
+                    }
+                }
+                for (const Gap& g : gap) {
+                    const double sl = slack(g);
+                    const int p = var(g.vertical, g.to), q = var(g.vertical, g.from);
+                    const double h = mu / (sl * sl);
+                    if (p >= 0) {
+                        grad[p] -= mu / sl;
+                        trip.emplace_back(p, p, h);
+                    }
+                    if (q >= 0) {
+                        grad[q] += mu / sl;
+                        trip.emplace_back(q, q, h);
+                    }
+                    if (p >= 0 && q >= 0) {
+                        trip.emplace_back(p, q, -h);
+                        trip.emplace_back(q, p, -h);
+                    }
+                }
+                Eigen::SparseMatrix<double> H(nv, nv);
+                H.setFromTriplets(trip.begin(), trip.end());
+                // Levenberg–Marquardt damping on the diagonal, adapted below.
+                for (int p = 0; p < nv; ++p) H.coeffRef(p, p) += damping * H.coeff(p, p) + 1e-12;
+                if (!analysed) {
+                    solver.analyzePattern(H);
+                    analysed = true;
+                }
+                solver.factorize(H);
+                if (solver.info() != Eigen::Success) break;
+                const Eigen::VectorXd step = solver.solve(-grad);
+                // Fraction to the boundary: keep every slack positive.
+                double alpha = 1.0;
+                auto delta = [&](bool axisX, int seg) {
+                    const int p = var(axisX, seg);
+                    return p < 0 ? 0.0 : step[p];
+                };
+                for (const Gap& g : gap) {
+                    const double ds = delta(g.vertical, g.to) - delta(g.vertical, g.from);
+                    if (ds < 0) alpha = std::min(alpha, 0.95 * slack(g) / -ds);
+                }
+                const double before = merit(mu);
+                const Coordinates saved = c;
+                bool accepted = false;
+                for (int back = 0; back < 30; ++back) {
+                    for (int k = 0; k < s.verticalCount; ++k)
+                        if (varX[k] >= 0) c.x[k] = saved.x[k] + alpha * step[varX[k]];
+                    for (int k = 0; k < s.horizontalCount; ++k)
+                        if (varY[k] >= 0) c.y[k] = saved.y[k] + alpha * step[varY[k]];
+                    if (merit(mu) <= before + 1e-4 * alpha * grad.dot(step)) {
+                        accepted = true;
+                        break;
+                    }
+                    alpha *= 0.5;
+                }
+                if (!accepted) {
+                    c = saved;
+                    if (damping > 1e6) break;
+                    damping *= 10;
+                    continue;
+                }
+                damping = std::max(1e-9, damping * 0.3);
+                if (alpha * step.lpNorm<Eigen::Infinity>() < 1e-10 * scale) break;
+            }
+            if (mu <= muEnd) break;
+            mu = std::max(muEnd, mu * 0.05);
+        }
+        result.newtonSteps = steps;
+    }
+
+    // Planning grid: move each free segment to the nearest module line when
+    // that keeps every requirement.
+    if (options_.grid > 0) {
+        auto snap = [&](bool axisX, int seg) {
+            double& v = c.at(axisX, seg);
+            const double old = v;
+            v = std::round(old / options_.grid) * options_.grid;
+            for (const Gap& g : gap)
+                if (g.vertical == axisX && (g.from == seg || g.to == seg) && slack(g) < -1e-12) {
+                    v = old;
+                    return false;
+                }
+            return true;
+        };
+        for (int k = 0; k < s.verticalCount; ++k)
+            if (varX[k] >= 0 && !snap(true, k))
+                result.unmet.push_back({"grid", -1, -1, options_.grid, c.x[k], "a wall could not be put on the planning grid"});
+        for (int k = 0; k < s.horizontalCount; ++k)
+            if (varY[k] >= 0 && !snap(false, k))
+                result.unmet.push_back({"grid", -1, -1, options_.grid, c.y[k], "a wall could not be put on the planning grid"});
+    }
+
+    result.x = c.x;
+    result.y = c.y;
+    result.objective = objective();
+    result.rects.resize(n);
+    for (int v = 0; v < n; ++v)
+        if (!x_.isPole(v))
+            result.rects[v] = {c.x[s.west[v]], c.y[s.south[v]], c.x[s.east[v]], c.y[s.north[v]]};
+    result.rooms.resize(brief_.rooms.size());
+    for (std::size_t i = 0; i < brief_.rooms.size(); ++i) {
+        const Rect& q = result.rects[i];
+        RoomSize& rs = result.rooms[i];
+        rs.area = q.area();
+        rs.deviation = (rs.area - target_[i]) / target_[i];
+        rs.aspect = std::max(q.width(), q.depth()) / std::min(q.width(), q.depth());
+        const Room& room = brief_.rooms[i];
+        if (std::abs(rs.deviation) > 0.01)
+            result.unmet.push_back({"area", static_cast<int>(i), -1, target_[i], rs.area,
+                                    room.displayName() + " gets " + std::to_string(rs.area) + " instead of " +
+                                        std::to_string(target_[i])});
+        if (room.minWidth && std::min(q.width(), q.depth()) < *room.minWidth - 1e-9)
+            result.unmet.push_back({"minWidth", static_cast<int>(i), -1, *room.minWidth,
+                                    std::min(q.width(), q.depth()), room.displayName() + " is narrower than its minimum width"});
+        if (room.maxAspect && rs.aspect > *room.maxAspect + 1e-6)
+            result.unmet.push_back({"maxAspect", static_cast<int>(i), -1, *room.maxAspect, rs.aspect,
+                                    room.displayName() + " is more elongated than its maximum aspect"});
+    }
+    for (std::size_t i = 0; i < segs_.walls.size(); ++i) {
+        const auto& wall = segs_.walls[i];
+        if (wallMin_[i] <= options_.anyWall) continue;
+        const double len = wall.vertical ? c.y[wall.to] - c.y[wall.from] : c.x[wall.to] - c.x[wall.from];
+        if (len < wallMin_[i] - 1e-9)
+            result.unmet.push_back({"doorWall", wall.u, wall.v, wallMin_[i], len, "a door wall is shorter than a door"});
+    }
+    return result;
+}
+
+std::pair<double, double> SizingProblem::segmentRange(const SizingResult& current, bool vertical, int segment) const {
+    double lo = -std::numeric_limits<double>::infinity(), hi = std::numeric_limits<double>::infinity();
+    const auto& co = vertical ? current.x : current.y;
+    for (const Gap& g : gaps()) {
+        if (g.vertical != vertical) continue;
+        if (g.to == segment) lo = std::max(lo, co[g.from] + g.min);
+        if (g.from == segment) hi = std::min(hi, co[g.to] - g.min);
+    }
+    return {lo, hi};
+}
+
+} // namespace abut

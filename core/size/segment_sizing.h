@@ -1,0 +1,109 @@
+// Sizing a layout: positions of the maximal segments that bring every room to
+// its target area inside a fixed footprint.
+//
+// Method: interior-point (log-barrier) Gauss–Newton on the segment positions,
+// in the spirit of convex floor planning (Boyd & Vandenberghe, Convex
+// Optimization, §8.8) but with the footprint fixed. For a fixed layout every
+// hard requirement is a difference of two segment coordinates: a room at
+// least its minimum width in both directions, a door wall at least doorWidth,
+// every other contact at least `anyWall`, a spare space at least
+// `spareMinimum`. These stay strictly satisfied through a log barrier, so the
+// segment order can never break. The error measure minimised is
+//     Σ_rooms log²(w·h / A)  +  β Σ_spares (w·h / Ā)²  +  γ Σ_rooms aspect excess²
+// (relative area error, symmetric in too big and too small, and well scaled
+// for rooms of very different sizes; spare spaces as small as the constraints let them be;
+// `maxAspect` as a soft wish). Each Newton system is sparse (every residual
+// touches four segments) and solved with Eigen's SimplicialLDLT; the sparsity
+// pattern is analysed once per problem. Why this and not a closed form: only
+// one-sided layouts are area-universal (Eppstein, Mumford, Speckmann &
+// Verbeek, SIAM J. Comput. 41(3), 2012); for them the least-squares optimum
+// is exact, for the others it is the best compromise, and the same solver
+// serves both, warm-started during a drag.
+//
+// Precondition: a valid labeling of the extended graph. Running time per
+// Newton step O(V) plus one sparse factorisation; 20–80 steps cold, a few warm.
+#pragma once
+
+#include "brief/brief.h"
+#include "dual/rectangular_dual.h"
+
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace abut {
+
+struct SizingOptions {
+    double doorWidth = 0.9;     // m, shortest wall for a door adjacency
+    double anyWall = 0.3;       // m, shortest wall for any other contact
+    double spareMinimum = 0.3;  // m, smallest side of a spare space
+    double spareWeight = 0.05;  // β
+    double aspectWeight = 0.3;  // γ
+    double grid = 0.0;          // m, planning module to snap segments to (0 = none)
+    int maxNewtonSteps = 400;
+    std::vector<int> lockedVertical, lockedHorizontal; // segment ids held where they are
+    std::vector<int> lockedRooms;                      // vertex ids whose four sides are held
+};
+
+enum class SizingStatus {
+    Solved,       // every hard requirement met
+    Relaxed,      // the hard requirements could not all fit; they were scaled down (see unmet)
+};
+
+struct UnmetRequirement {
+    std::string kind;    // "minWidth", "doorWall", "area", "maxAspect", "grid"
+    int room = -1;       // vertex id (rooms: brief index)
+    int other = -1;      // second room for walls
+    double wanted = 0, got = 0;
+    std::string message;
+};
+
+struct RoomSize {
+    double area = 0, deviation = 0, aspect = 0; // deviation relative: (area − target)/target
+};
+
+struct SizingResult {
+    SizingStatus status = SizingStatus::Solved;
+    std::vector<double> x, y;       // per vertical / horizontal segment
+    std::vector<Rect> rects;        // per vertex of the extended graph (poles empty)
+    std::vector<RoomSize> rooms;    // per brief room
+    std::vector<UnmetRequirement> unmet;
+    double objective = 0;
+    double relaxation = 1.0;   // factor the hard minimums were scaled by to fit (1 = none)
+    int newtonSteps = 0;
+};
+
+// Everything about a layout that does not change while the planner works on
+// it: built once, sized many times.
+class SizingProblem {
+public:
+    SizingProblem(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,
+                  const Footprint& footprint, const SizingOptions& options);
+
+    // Cold start from a stretched longest-path layout, or warm from `start`
+    // (kept where still strictly feasible).
+    SizingResult solve(const SizingResult* start = nullptr) const;
+
+    // How far segment `segment` (vertical or horizontal) can move with every
+    // other segment where `current` has it, keeping all hard requirements.
+    std::pair<double, double> segmentRange(const SizingResult& current, bool vertical, int segment) const;
+
+    const SegmentStructure& segments() const { return segs_; }
+    const SizingOptions& options() const { return options_; }
+    void setOptions(const SizingOptions& o) { options_ = o; }
+    void setTargetArea(int room, double area) { target_[room] = area; }
+
+private:
+    struct Gap { bool vertical; int from, to; double min; };
+    std::vector<Gap> gaps() const;
+
+    const Brief& brief_;
+    const ExtendedGraph& x_;
+    SegmentStructure segs_;
+    Footprint footprint_;
+    SizingOptions options_;
+    std::vector<double> target_;
+    std::vector<double> wallMin_; // per wall of segs_
+};
+
+} // namespace abut
