@@ -31,6 +31,7 @@ bool refuseToOverwriteInput(const std::string& input, const std::string& target,
 int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
 int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
 int runLabelings(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
+int runExport(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
 int runExtended(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
 
 } // namespace abut::cli

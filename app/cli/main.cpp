@@ -16,6 +16,8 @@ void printUsage(std::ostream& out) {
            "                             compute ranked, sized variants and write them\n"
            "  labelings EXT.json [--count] [--limit N] [--seed S]\n"
            "                             list or count the regular edge labelings of an extended graph\n"
+           "  export PROJECT -o FILE [--variant K] [--sheet A4|A3|A1] [--walls T]\n"
+           "                             write .dxf, .pdf, .svg, .png or .csv of variant K (1 = best)\n"
            "  extended PROJECT -o EXT.json  write the extended graph (rooms, poles, spare spaces)\n"
            "  --help                     this text\n"
            "exit codes: 0 done/feasible, 2 bad input, 3 no plan (infeasible), 4 internal error\n";
@@ -34,6 +36,7 @@ int main(int argc, char** argv) {
     if (command == "check") return abut::cli::runCheck(args, std::cout, std::cerr);
     if (command == "plan") return abut::cli::runPlan(args, std::cout, std::cerr);
     if (command == "labelings") return abut::cli::runLabelings(args, std::cout, std::cerr);
+    if (command == "export") return abut::cli::runExport(args, std::cout, std::cerr);
     if (command == "extended") return abut::cli::runExtended(args, std::cout, std::cerr);
     std::cerr << "abut-cli: unknown command \"" << command << "\"\n";
     printUsage(std::cerr);

@@ -1,0 +1,70 @@
+#include "export/svg_writer.h"
+
+#include "export/schedule.h"
+
+#include <algorithm>
+#include <cstdio>
+
+namespace abut {
+
+namespace {
+
+std::string escaped(const std::string& s) {
+    std::string out;
+    for (char c : s) {
+        switch (c) {
+        case '&': out += "&amp;"; break;
+        case '<': out += "&lt;"; break;
+        case '>': out += "&gt;"; break;
+        case '"': out += "&quot;"; break;
+        default: out += c;
+        }
+    }
+    return out;
+}
+
+std::string fmt(double v) {
+    char buf[32];
+    std::snprintf(buf, sizeof buf, "%.2f", v);
+    return buf;
+}
+
+} // namespace
+
+std::string planSvg(const Brief& brief, const Footprint& fp, const PlanVariant& v, double ppu) {
+    const double margin = 20;
+    const double W = fp.width * ppu + 2 * margin, H = fp.depth * ppu + 2 * margin;
+    auto X = [&](double x) { return margin + x * ppu; };
+    auto Y = [&](double y) { return margin + (fp.depth - y) * ppu; }; // north up
+    std::string out = "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"
+                      "<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"" + fmt(W) +
+                      "\" height=\"" + fmt(H) + "\" viewBox=\"0 0 " + fmt(W) + " " + fmt(H) + "\">\n";
+    out += "  <title>Plan</title>\n";
+    out += "  <style>.room{fill:#f4efe4;stroke:#222;stroke-width:1.5}.spare{fill:#ddd;stroke:#666;"
+           "stroke-width:1;stroke-dasharray:4 3}.outline{fill:none;stroke:#000;stroke-width:3}"
+           "text{font-family:sans-serif;fill:#111;text-anchor:middle}</style>\n";
+    const std::string unit = areaUnit(brief.units);
+    for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+        const Rect& r = v.rooms[i];
+        out += "  <rect class=\"room\" id=\"" + escaped(brief.rooms[i].id) + "\" x=\"" + fmt(X(r.x0)) + "\" y=\"" +
+               fmt(Y(r.y1)) + "\" width=\"" + fmt(r.width() * ppu) + "\" height=\"" + fmt(r.depth() * ppu) + "\"/>\n";
+    }
+    for (const Rect& r : v.spaces)
+        out += "  <rect class=\"spare\" x=\"" + fmt(X(r.x0)) + "\" y=\"" + fmt(Y(r.y1)) + "\" width=\"" +
+               fmt(r.width() * ppu) + "\" height=\"" + fmt(r.depth() * ppu) + "\"/>\n";
+    out += "  <rect class=\"outline\" x=\"" + fmt(X(0)) + "\" y=\"" + fmt(Y(fp.depth)) + "\" width=\"" +
+           fmt(fp.width * ppu) + "\" height=\"" + fmt(fp.depth * ppu) + "\"/>\n";
+    for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+        const Rect& r = v.rooms[i];
+        const double size = std::clamp(std::min(r.width(), r.depth()) * ppu / 6.0, 7.0, 16.0);
+        const double cx = X((r.x0 + r.x1) / 2), cy = Y((r.y0 + r.y1) / 2);
+        out += "  <text x=\"" + fmt(cx) + "\" y=\"" + fmt(cy - 0.2 * size) + "\" font-size=\"" + fmt(size) + "\">" +
+               escaped(brief.rooms[i].displayName()) + "</text>\n";
+        out += "  <text x=\"" + fmt(cx) + "\" y=\"" + fmt(cy + 1.0 * size) + "\" font-size=\"" + fmt(size * 0.85) +
+               "\">" + fmt(r.area()).substr(0, fmt(r.area()).size() - 1) + " " + unit + "</text>\n";
+    }
+    out += "</svg>\n";
+    return out;
+}
+
+} // namespace abut
