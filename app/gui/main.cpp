@@ -7,6 +7,7 @@
 #include <QApplication>
 #include <QCommandLineParser>
 #include <QPixmap>
+#include <QElapsedTimer>
 #include <QTimer>
 
 #include <iostream>
@@ -49,7 +50,12 @@ int main(int argc, char** argv) {
         const QStringList wh = parser.value(sizeOpt).split(QLatin1Char('x'));
         if (wh.size() == 2) window.resize(wh[0].toInt(), wh[1].toInt());
         window.show();
+        // Let the background planning finish before the picture is taken.
         QTimer::singleShot(300, &window, [&] {
+            QElapsedTimer waited;
+            waited.start();
+            while (window.planning() && waited.elapsed() < 60000) QApplication::processEvents(QEventLoop::AllEvents, 50);
+            QApplication::processEvents();
             window.sketchView()->fitAll();
             const QString out = parser.value(shotOpt);
             if (!window.grab().save(out)) {

@@ -2,14 +2,17 @@
 
 #include "caution.h"
 #include "io/project_io.h"
+#include "plan/plan_builder.h"
+#include "plan_view.h"
 #include "sketch_view.h"
+
+#include <QtConcurrent/QtConcurrentRun>
 
 #include <QApplication>
 #include <QDockWidget>
 #include <QFileDialog>
 #include <QFileInfo>
 #include <QHeaderView>
-#include <QLabel>
 #include <QListWidget>
 #include <QMenuBar>
 #include <QMessageBox>
@@ -27,13 +30,13 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
     setWindowIcon(QIcon(QStringLiteral(":/icons/abut.svg")));
     sketch_ = new SketchView(this);
 
-    planPlaceholder_ = new QLabel(tr("Plan\n\nThe plan view arrives with the planning core."), this);
-    planPlaceholder_->setAlignment(Qt::AlignCenter);
-    planPlaceholder_->setStyleSheet(QStringLiteral("color: #666; background: #f4f3ef;"));
+    planView_ = new PlanView(this);
+    planView_->showMessage(tr("Open a brief to see its plans."));
+    connect(&planner_, &QFutureWatcher<Plan>::finished, this, &MainWindow::planReady);
 
     auto* split = new QSplitter(Qt::Horizontal, this);
     split->addWidget(sketch_);
-    split->addWidget(planPlaceholder_);
+    split->addWidget(planView_);
     split->setStretchFactor(0, 1);
     split->setStretchFactor(1, 1);
     split->setSizes({640, 640});
@@ -118,12 +121,36 @@ void MainWindow::refreshViews() {
         for (int c = 0; c < cells.size(); ++c)
             roomTable_->setItem(i, c, new QTableWidgetItem(cells[c]));
     }
+    startPlanning();
     diagnostics_->clear();
     diagnostics_->addItem(tr("%n room(s), %1 adjacencies; target area %2 %3", nullptr,
                              int(brief_.rooms.size()))
                               .arg(brief_.adjacencies.size())
                               .arg(brief_.totalTargetArea(), 0, 'f', 1)
                               .arg(u2));
+}
+
+void MainWindow::startPlanning() {
+    // Plans are computed off the UI thread; the window stays responsive.
+    planView_->showMessage(tr("Computing plans…"));
+    statusBar()->showMessage(tr("Computing plans…"));
+    const Brief brief = brief_;
+    planner_.setFuture(QtConcurrent::run([brief] { return buildPlan(brief); }));
+}
+
+void MainWindow::planReady() {
+    plan_ = planner_.result();
+    for (const Diagnostic& d : plan_.diagnostics) {
+        if (d.code == "added-contact") continue;
+        auto* item = new QListWidgetItem(QString::fromStdString(d.message), diagnostics_);
+        item->setToolTip(item->text());
+    }
+    if (plan_.variants.empty()) {
+        planView_->showMessage(QString::fromStdString(plan_.summary));
+    } else {
+        planView_->showPlan(brief_, plan_, 0);
+    }
+    statusBar()->showMessage(QString::fromStdString(plan_.summary));
 }
 
 void MainWindow::showAbout() {

@@ -1,15 +1,17 @@
 #pragma once
 
 #include "brief/brief.h"
+#include "plan/plan.h"
 
+#include <QFutureWatcher>
 #include <QMainWindow>
 
-class QLabel;
 class QListWidget;
 class QTableWidget;
 
 namespace abut::gui {
 
+class PlanView;
 class SketchView;
 
 class MainWindow : public QMainWindow {
@@ -22,6 +24,8 @@ public:
     bool openProject(const QString& path, QStringList* errors = nullptr);
     const Brief& brief() const { return brief_; }
     SketchView* sketchView() const { return sketch_; }
+    // True while plans are being computed in the background.
+    bool planning() const { return planner_.isRunning(); }
 
 public slots:
     void showAbout();
@@ -29,13 +33,17 @@ public slots:
 private:
     void buildMenus();
     void refreshViews();
+    void startPlanning();
+    void planReady();
 
     Brief brief_;
     QString path_;
     SketchView* sketch_ = nullptr;
     QTableWidget* roomTable_ = nullptr;
     QListWidget* diagnostics_ = nullptr;
-    QLabel* planPlaceholder_ = nullptr;
+    PlanView* planView_ = nullptr;
+    QFutureWatcher<Plan> planner_;
+    Plan plan_;
 };
 
 } // namespace abut::gui
