@@ -1,5 +1,7 @@
 #include "cli_commands.h"
 
+#include "io/project_io.h"
+
 #include <filesystem>
 
 namespace abut::cli {
@@ -27,6 +29,12 @@ ParsedArgs parseArgs(const std::vector<std::string>& args, const std::set<std::s
         }
     }
     return p;
+}
+
+bool loadOrReport(const std::string& path, LoadResult& out, std::ostream& err) {
+    out = loadProject(path);
+    for (const FileError& e : out.errors) err << e.toString() << "\n";
+    return out.ok();
 }
 
 bool refuseToOverwriteInput(const std::string& input, const std::string& target, std::ostream& err) {

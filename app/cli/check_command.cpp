@@ -49,11 +49,8 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     }
     const std::string& path = a.positional[0];
     const bool json = a.flags.count("--json") > 0;
-    const LoadResult loaded = loadProject(path);
-    if (!loaded.ok()) {
-        for (const FileError& e : loaded.errors) err << e.toString() << "\n";
-        return exitBadInput;
-    }
+    LoadResult loaded;
+    if (!loadOrReport(path, loaded, err)) return exitBadInput;
     const Brief& brief = loaded.brief;
     const BriefSummary s = summarize(brief);
     const AugmentResult plan = buildExtendedGraph(brief);

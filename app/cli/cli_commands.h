@@ -6,6 +6,10 @@
 #include <string>
 #include <vector>
 
+namespace abut {
+struct LoadResult;
+}
+
 namespace abut::cli {
 
 constexpr int exitOk = 0;
@@ -24,6 +28,10 @@ struct ParsedArgs {
 // alone; anything else starting with '-' is an error naming the command.
 ParsedArgs parseArgs(const std::vector<std::string>& args, const std::set<std::string>& withValue,
                      const std::set<std::string>& flags, std::ostream& err, const std::string& usage);
+
+// Loads a project; on failure writes every error, one line each, and
+// returns false.
+bool loadOrReport(const std::string& path, LoadResult& out, std::ostream& err);
 
 // False (with a message) when `target` is the same file as `input`.
 bool refuseToOverwriteInput(const std::string& input, const std::string& target, std::ostream& err);

@@ -87,11 +87,8 @@ int runExport(const std::vector<std::string>& args, std::ostream& out, std::ostr
         }
     }
     if (!refuseToOverwriteInput(path, target, err)) return exitBadInput;
-    const LoadResult loaded = loadProject(path);
-    if (!loaded.ok()) {
-        for (const FileError& e : loaded.errors) err << e.toString() << "\n";
-        return exitBadInput;
-    }
+    LoadResult loaded;
+    if (!loadOrReport(path, loaded, err)) return exitBadInput;
     const Brief& brief = loaded.brief;
     PlanOptions options;
     options.variants = std::max(options.variants, variant);

@@ -17,11 +17,8 @@ int runExtended(const std::vector<std::string>& args, std::ostream& out, std::os
     const std::string& path = a.positional[0];
     const std::string& target = a.values.at("-o");
     if (!refuseToOverwriteInput(path, target, err)) return exitBadInput;
-    const LoadResult loaded = loadProject(path);
-    if (!loaded.ok()) {
-        for (const FileError& e : loaded.errors) err << e.toString() << "\n";
-        return exitBadInput;
-    }
+    LoadResult loaded;
+    if (!loadOrReport(path, loaded, err)) return exitBadInput;
     const AugmentResult r = buildExtendedGraph(loaded.brief);
     if (r.status == AugmentStatus::Empty || r.status == AugmentStatus::Internal) {
         err << path << ": " << r.summary << "\n";

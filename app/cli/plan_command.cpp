@@ -48,11 +48,8 @@ int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostrea
     const std::string& path = a.positional[0];
     const std::string& target = a.values.at("-o");
     if (!refuseToOverwriteInput(path, target, err)) return exitBadInput;
-    const LoadResult loaded = loadProject(path);
-    if (!loaded.ok()) {
-        for (const FileError& e : loaded.errors) err << e.toString() << "\n";
-        return exitBadInput;
-    }
+    LoadResult loaded;
+    if (!loadOrReport(path, loaded, err)) return exitBadInput;
     const Plan plan = buildPlan(loaded.brief, options);
     if (plan.status == PlanStatus::Internal) {
         err << path << ": " << plan.summary << "\n";

@@ -36,18 +36,14 @@ std::vector<int> compact(UnionFind& uf, const std::vector<char>& used, int& coun
     return out;
 }
 
-struct Arc {
-    int from, to;
-    double weight;
-};
+} // namespace
 
-// Longest path from every source, by Kahn's topological order.
-std::vector<double> longestPath(int count, const std::vector<Arc>& arcs) {
+std::vector<double> longestPaths(int count, const std::vector<std::pair<std::pair<int, int>, double>>& arcs) {
     std::vector<std::vector<std::pair<int, double>>> out(count);
     std::vector<int> indegree(count, 0);
-    for (const Arc& a : arcs) {
-        out[a.from].emplace_back(a.to, a.weight);
-        ++indegree[a.to];
+    for (const auto& [e, w] : arcs) {
+        out[e.first].emplace_back(e.second, w);
+        ++indegree[e.second];
     }
     std::vector<double> dist(count, 0.0);
     std::vector<int> ready;
@@ -63,8 +59,6 @@ std::vector<double> longestPath(int count, const std::vector<Arc>& arcs) {
     }
     return dist;
 }
-
-} // namespace
 
 SegmentStructure maximalSegments(const ExtendedGraph& x, const RegularEdgeLabeling& rel) {
     const PlaneGraph& g = x.graph;
@@ -130,20 +124,20 @@ SegmentStructure maximalSegments(const ExtendedGraph& x, const RegularEdgeLabeli
 
 DualLayout longestPathLayout(const ExtendedGraph& x, const SegmentStructure& s, const DualWeights& w) {
     const int n = x.graph.vertexCount();
-    std::vector<Arc> xArcs, yArcs;
+    std::vector<std::pair<std::pair<int, int>, double>> xArcs, yArcs;
     for (int v = 0; v < n; ++v) {
         if (x.isPole(v)) continue;
-        xArcs.push_back({s.west[v], s.east[v], w.minWidth.empty() ? 1.0 : w.minWidth[v]});
-        yArcs.push_back({s.south[v], s.north[v], w.minDepth.empty() ? 1.0 : w.minDepth[v]});
+        xArcs.push_back({{s.west[v], s.east[v]}, w.minWidth.empty() ? 1.0 : w.minWidth[v]});
+        yArcs.push_back({{s.south[v], s.north[v]}, w.minDepth.empty() ? 1.0 : w.minDepth[v]});
     }
     for (std::size_t i = 0; i < s.walls.size(); ++i) {
         const auto& wall = s.walls[i];
         const double length = std::max(w.anyWall, i < w.minWall.size() ? w.minWall[i] : 0.0);
-        (wall.vertical ? yArcs : xArcs).push_back({wall.from, wall.to, length});
+        (wall.vertical ? yArcs : xArcs).push_back({{wall.from, wall.to}, length});
     }
     DualLayout layout;
-    layout.xOfVertical = longestPath(s.verticalCount, xArcs);
-    layout.yOfHorizontal = longestPath(s.horizontalCount, yArcs);
+    layout.xOfVertical = longestPaths(s.verticalCount, xArcs);
+    layout.yOfHorizontal = longestPaths(s.horizontalCount, yArcs);
     layout.width = layout.xOfVertical[s.eastSegment];
     layout.depth = layout.yOfHorizontal[s.northSegment];
     layout.rects.resize(n);

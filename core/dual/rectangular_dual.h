@@ -70,6 +70,10 @@ struct DualLayout {
 // Longest-path coordinates: every segment as far west / south as the weights allow.
 DualLayout longestPathLayout(const ExtendedGraph& x, const SegmentStructure& segs, const DualWeights& w);
 
+// Longest distances from the sources of a DAG given as weighted arcs
+// (Kahn's order, no recursion). O(V + E).
+std::vector<double> longestPaths(int count, const std::vector<std::pair<std::pair<int, int>, double>>& arcs);
+
 struct DualCheck {
     bool ok = true;
     std::string problem;

@@ -46,15 +46,7 @@ DualWeights hardMinimums(const Brief& brief, const ExtendedGraph& x, const Segme
         else if (x.isSpare(v)) w.minWidth[v] = w.minDepth[v] = o.spareMinimum;
     }
     w.anyWall = o.anyWall;
-    w.minWall.assign(segs.walls.size(), 0.0);
-    for (std::size_t i = 0; i < segs.walls.size(); ++i) {
-        const auto& wall = segs.walls[i];
-        if (!x.isRoom(wall.u) || !x.isRoom(wall.v)) continue;
-        for (const Adjacency& a : brief.adjacencies)
-            if (a.kind == AdjacencyKind::Door &&
-                std::minmax(brief.roomIndex(a.a), brief.roomIndex(a.b)) == std::minmax(wall.u, wall.v))
-                w.minWall[i] = o.doorWidth;
-    }
+    w.minWall = wallMinimums(brief, x, segs, o.doorWidth, o.anyWall);
     return w;
 }
 
@@ -105,6 +97,21 @@ void updateMetrics(const Brief& brief, const Footprint& fp, const ExtendedGraph&
     out.score = variantScore(brief, fp, out);
 }
 
+// `v` with the rectangles of a sizing result, its metrics recomputed.
+PlanVariant withSizes(const Brief& brief, const Footprint& fp, const PlanVariant& v, const SizingResult& sized) {
+    PlanVariant out = v;
+    out.rooms.clear();
+    out.spaces.clear();
+    for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
+        if (v.extended.isRoom(u)) out.rooms.push_back(sized.rects[u]);
+        else if (v.extended.isSpare(u)) out.spaces.push_back(sized.rects[u]);
+    }
+    updateMetrics(brief, fp, v.extended, out);
+    out.sized = true;
+    out.unmet = sized.unmet;
+    return out;
+}
+
 } // namespace
 
 double variantScore(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
@@ -144,17 +151,7 @@ PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const Regu
     }
     DualWeights w;
     w.anyWall = options.anyWall;
-    w.minWall.assign(segs.walls.size(), 0.0);
-    for (std::size_t i = 0; i < segs.walls.size(); ++i) {
-        const auto& wall = segs.walls[i];
-        if (!x.isRoom(wall.u) || !x.isRoom(wall.v)) continue;
-        for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
-            const Adjacency& adj = brief.adjacencies[a];
-            const int p = brief.roomIndex(adj.a), q = brief.roomIndex(adj.b);
-            if (adj.kind == AdjacencyKind::Door && std::minmax(p, q) == std::minmax(wall.u, wall.v))
-                w.minWall[i] = brief.doorWidth;
-        }
-    }
+    w.minWall = wallMinimums(brief, x, segs, brief.doorWidth, options.anyWall);
     auto layoutAt = [&](double t) {
         w.minWidth.assign(n, 1.0);
         w.minDepth.assign(n, 1.0);
@@ -295,17 +292,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
     for (std::size_t i = 0; i < toSize; ++i) {
         PlanVariant& v = plan.variants[i];
         const SizingProblem problem(brief, v.extended, v.labeling, plan.footprint, sizing);
-        const SizingResult sized = problem.solve();
-        PlanVariant candidate = v;
-        candidate.rooms.clear();
-        candidate.spaces.clear();
-        for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
-            if (v.extended.isRoom(u)) candidate.rooms.push_back(sized.rects[u]);
-            else if (v.extended.isSpare(u)) candidate.spaces.push_back(sized.rects[u]);
-        }
-        updateMetrics(brief, plan.footprint, v.extended, candidate);
-        candidate.sized = true;
-        candidate.unmet = sized.unmet;
+        PlanVariant candidate = withSizes(brief, plan.footprint, v, problem.solve());
         if (!checkVariant(brief, plan.footprint, candidate).empty()) continue; // keep the fitted one
         v = std::move(candidate);
     }
@@ -378,16 +365,9 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
                 }
             }
         }
-        PlanVariant candidate = v;
-        candidate.labeling = rel;
-        candidate.rooms.clear();
-        candidate.spaces.clear();
-        for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
-            if (v.extended.isRoom(u)) candidate.rooms.push_back(best.rects[u]);
-            else if (v.extended.isSpare(u)) candidate.spaces.push_back(best.rects[u]);
-        }
-        updateMetrics(brief, plan.footprint, v.extended, candidate);
-        candidate.unmet = best.unmet;
+        PlanVariant relabelled = v;
+        relabelled.labeling = rel;
+        PlanVariant candidate = withSizes(brief, plan.footprint, relabelled, best);
         candidate.oneSided = isOneSided(v.extended, rel);
         if (checkVariant(brief, plan.footprint, candidate).empty() && candidate.score <= v.score) v = std::move(candidate);
     }

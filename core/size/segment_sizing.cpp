@@ -14,15 +14,21 @@ SizingProblem::SizingProblem(const Brief& brief, const ExtendedGraph& x, const R
     : brief_(brief), x_(x), segs_(maximalSegments(x, rel)), footprint_(footprint), options_(options) {
     target_.resize(brief.rooms.size());
     for (std::size_t i = 0; i < brief.rooms.size(); ++i) target_[i] = brief.rooms[i].area;
-    wallMin_.assign(segs_.walls.size(), options.anyWall);
-    for (std::size_t i = 0; i < segs_.walls.size(); ++i) {
-        const auto& wall = segs_.walls[i];
+    wallMin_ = wallMinimums(brief, x, segs_, options.doorWidth, options.anyWall);
+}
+
+std::vector<double> wallMinimums(const Brief& brief, const ExtendedGraph& x, const SegmentStructure& segs,
+                                 double doorWidth, double anyWall) {
+    std::vector<double> out(segs.walls.size(), anyWall);
+    for (std::size_t i = 0; i < segs.walls.size(); ++i) {
+        const auto& wall = segs.walls[i];
         if (!x.isRoom(wall.u) || !x.isRoom(wall.v)) continue;
         for (const Adjacency& a : brief.adjacencies)
             if (a.kind == AdjacencyKind::Door &&
                 std::minmax(brief.roomIndex(a.a), brief.roomIndex(a.b)) == std::minmax(wall.u, wall.v))
-                wallMin_[i] = std::max(wallMin_[i], options.doorWidth);
+                out[i] = std::max(out[i], doorWidth);
     }
+    return out;
 }
 
 std::vector<SizingProblem::Gap> SizingProblem::gaps() const {
@@ -54,25 +60,7 @@ struct Coordinates {
 
 double longestSpan(int count, const std::vector<std::pair<std::pair<int, int>, double>>& arcs, int from, int to,
                    std::vector<double>& dist) {
-    // Kahn over the segment graph of one axis.
-    std::vector<std::vector<std::pair<int, double>>> out(count);
-    std::vector<int> indeg(count, 0);
-    for (const auto& [e, w] : arcs) {
-        out[e.first].emplace_back(e.second, w);
-        ++indeg[e.second];
-    }
-    dist.assign(count, 0.0);
-    std::vector<int> ready;
-    for (int i = 0; i < count; ++i)
-        if (!indeg[i]) ready.push_back(i);
-    while (!ready.empty()) {
-        const int s = ready.back();
-        ready.pop_back();
-        for (const auto& [t, w] : out[s]) {
-            dist[t] = std::max(dist[t], dist[s] + w);
-            if (--indeg[t] == 0) ready.push_back(t);
-        }
-    }
+    dist = longestPaths(count, arcs);
     return dist[to] - dist[from];
 }
 

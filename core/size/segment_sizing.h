@@ -58,6 +58,11 @@ struct UnmetRequirement {
     std::string message;
 };
 
+// Shortest length each wall of `segs` must keep: doorWidth between two rooms
+// with a door adjacency, anyWall otherwise.
+std::vector<double> wallMinimums(const Brief& brief, const ExtendedGraph& x, const SegmentStructure& segs,
+                                 double doorWidth, double anyWall);
+
 struct RoomSize {
     double area = 0, deviation = 0, aspect = 0; // deviation relative: (area − target)/target
 };
