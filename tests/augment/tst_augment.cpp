@@ -306,9 +306,9 @@ void TestAugment::stuckFaceGetsSpares() {
 }
 
 void TestAugment::maximalPlanarEdgeCount() {
-    // A maximal planar graph has 3n − 6 edges (references.md): the rooms part
-    // of an extended graph plus the poles has 3V − 7 = 3(V) − 6 − 1 (the
-    // outer face is a quadrangle). Checked on a stacked triangulation.
+    // A maximal planar graph has 3n − 6 edges and 2n − 4 faces (Euler's
+    // formula for plane graphs, V − E + F = 2 with every face a triangle).
+    // Checked on a stacked triangulation and its embedding.
     std::mt19937 rng(3);
     const auto edges = abut::testing::randomPlanarEdges(30, 1.0, rng);
     QCOMPARE(static_cast<int>(edges.size()), 3 * 30 - 6);
