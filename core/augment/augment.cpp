@@ -246,6 +246,11 @@ bool Builder::breakSeparatingTriangles(PlaneGraph& g, const std::vector<int>& ou
     const std::vector<Triangle> sep = separatingTriangles(g, outer);
     if (sep.empty()) return false;
     const Cover cover = cheapestCover(sep, [this](int u, int v) { return cost(u, v); });
+    if (!cover.exact)
+        note(Severity::Info, "cover-approximate",
+             "Many rooms enclose each other here; the adjacencies to give up were chosen greedily and may "
+             "not be the fewest possible.",
+             {});
     for (const auto& [u, v] : cover.edges) {
         // Explain with one triangle this edge breaks, and what it encloses.
         const Triangle* t = nullptr;
@@ -647,8 +652,8 @@ ExtendedGraph extendFrame(const OuterFrame& frame, const std::vector<std::string
     }
     const int k = static_cast<int>(frame.cycle.size());
     for (int i = 0; i < k; ++i) {
-        // Sides holding position i, in walk order (the first is the one that
-        // does not also hold the position before it... i.e. does not start here).
+        // The sides that hold position i, in walk order: the first is the one
+        // whose predecessor side does not hold it.
         bool on[4];
         for (int s = 0; s < 4; ++s) {
             const int from = corners.corner[s];

@@ -126,8 +126,6 @@ std::vector<FourCycle> fourCycles(const ExtendedGraph& x) {
                         for (int u : inside)
                             for (int t = 0; t < g.degree(u); ++t) fc.insideDarts.emplace_back(u, t);
                         fc.insideOnLeft = side == 0;
-                        fc.touched.assign(cyc.begin(), cyc.end());
-                        fc.touched.insert(fc.touched.end(), inside.begin(), inside.end());
                     }
                     if (!fc.insideDarts.empty()) out.push_back(std::move(fc));
                 }
@@ -236,7 +234,6 @@ const RegularEdgeLabeling* LabelingEnumerator::next() {
     if (!started_) {
         started_ = true;
         stack_.push_back({-1, 0});
-        listed_ = 1;
         return &current_;
     }
     while (!stack_.empty()) {
@@ -249,7 +246,6 @@ const RegularEdgeLabeling* LabelingEnumerator::next() {
             // A child exactly when flipping this cycle back is its first down-move.
             if (*downRanks_.begin() == r) {
                 stack_.push_back({ci, 0});
-                ++listed_;
                 return &current_;
             }
             apply(ci, Turn::Down);

@@ -34,7 +34,6 @@ struct FourCycle {
     std::array<int, 4> vertices{}; // in order around the cycle
     bool insideOnLeft = true;       // walking vertices[0] → [1] → [2], the inside is on the left
     std::vector<std::pair<int, int>> insideDarts;
-    std::vector<int> touched; // vertices whose local rules a flip can change
     std::vector<std::pair<int, int>> rimDarts; // the inside darts at the four cycle vertices
 };
 
@@ -67,7 +66,6 @@ public:
 
     // The next labeling, or nullptr when all have been listed.
     const RegularEdgeLabeling* next();
-    std::uint64_t listed() const { return listed_; }
 
 private:
     // Flips cycle `ci` (its sense must be `t`) and refreshes the cached sense
@@ -92,7 +90,6 @@ private:
     };
     std::vector<Frame> stack_;
     bool started_ = false;
-    std::uint64_t listed_ = 0;
 };
 
 // Counts labelings, stopping at `cap` (returns cap then).

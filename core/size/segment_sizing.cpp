@@ -39,13 +39,13 @@ std::vector<SizingProblem::Gap> SizingProblem::gaps() const {
         if (x_.isRoom(v)) m = brief_.rooms[v].minWidth.value_or(0.0);
         else m = options_.spareMinimum;
         m = std::max(m, 1e-3);
-        out.push_back({true, segs_.west[v], segs_.east[v], m});
-        out.push_back({false, segs_.south[v], segs_.north[v], m});
+        out.push_back({true, segs_.west[v], segs_.east[v], m, v});
+        out.push_back({false, segs_.south[v], segs_.north[v], m, v});
     }
     for (std::size_t i = 0; i < segs_.walls.size(); ++i) {
         const auto& wall = segs_.walls[i];
         // A vertical wall runs north–south: its length is measured in y.
-        out.push_back({!wall.vertical, wall.from, wall.to, wallMin_[i]});
+        out.push_back({!wall.vertical, wall.from, wall.to, wallMin_[i], -1});
     }
     return out;
 }
@@ -108,13 +108,9 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
         // natural size, the share as large as fits, then stretched.
         auto layout = [&](double t, std::vector<double>& xs, std::vector<double>& ys) {
             std::vector<std::pair<std::pair<int, int>, double>> ax, ay;
-            for (std::size_t i = 0; i < gap.size(); ++i) {
-                const Gap& g = gap[i];
+            for (const Gap& g : gap) {
                 double w = g.min * 1.01;
-                if (i < 2 * static_cast<std::size_t>(x_.graph.vertexCount() - 4)) {
-                    const int v = static_cast<int>(i / 2) + (static_cast<int>(i / 2) >= x_.roomCount ? 4 : 0);
-                    if (x_.isRoom(v)) w = std::max(w, t * std::sqrt(target_[v]));
-                }
+                if (g.vertex >= 0 && x_.isRoom(g.vertex)) w = std::max(w, t * std::sqrt(target_[g.vertex]));
                 (g.vertical ? ax : ay).push_back({{g.from, g.to}, w});
             }
             const double sx = longestSpan(s.verticalCount, ax, s.westSegment, s.eastSegment, xs);

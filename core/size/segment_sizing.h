@@ -99,7 +99,9 @@ public:
     void setTargetArea(int room, double area) { target_[room] = area; }
 
 private:
-    struct Gap { bool vertical; int from, to; double min; };
+    // coordinate[to] − coordinate[from] ≥ min on one axis; `vertex` is the
+    // room or spare whose extent it is (−1 for a wall).
+    struct Gap { bool vertical; int from, to; double min; int vertex = -1; };
     std::vector<Gap> gaps() const;
 
     const Brief& brief_;

@@ -175,9 +175,11 @@ with tempfile.TemporaryDirectory() as tmp:
     for f in sorted(os.listdir(samples)):
         if f.endswith(".abut.json"):
             check(os.path.join(samples, f), tmp)
-    # The family house in feet: areas and footprint converted (1 m = 3.28084 ft).
+    # The family house in feet: areas and footprint converted with the
+    # international foot, exactly 0.3048 m (international yard and pound
+    # agreement, 1959); the door wall 3 ft (common practice, no source).
     house = json.load(open(os.path.join(samples, "family-house.abut.json")))
-    k = 3.28084
+    k = 1 / 0.3048
     house["units"] = "ft"
     house["footprint"] = {"width": house["footprint"]["width"] * k, "depth": house["footprint"]["depth"] * k}
     house["doorWidth"] = 3.0

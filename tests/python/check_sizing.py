@@ -19,7 +19,7 @@ from shapely.geometry import box
 cli = sys.argv[1]
 count = int(sys.argv[2]) if len(sys.argv) > 2 else 60
 sizes = [int(v) for v in sys.argv[3].split(",")] if len(sys.argv) > 3 else [5, 8, 12, 20, 30, 50, 75, 100]
-DOOR = 0.9
+DOOR = 0.9  # shared wall a door needs, m (common practice, no source)
 TOL = 1e-6
 
 
@@ -75,7 +75,7 @@ def brief_of(rects, w, d):
 
 
 rng = random.Random(60)
-failures, checked, worst_seen = [], 0, 0.0
+failures, worst_seen = [], 0.0
 with tempfile.TemporaryDirectory() as tmp:
     for k in range(count):
         n = rng.choice(sizes)
@@ -110,10 +110,10 @@ with tempfile.TemporaryDirectory() as tmp:
                 continue
             if shared(rects[a["rooms"][0]], rects[a["rooms"][1]]) < DOOR - 1e-6:
                 failures.append(f"brief {k} ({n} rooms): door wall {a['rooms']} shorter than {DOOR}")
-        checked += 1
 
 for f in failures[:25]:
     print("FAIL", f)
+failed_briefs = {f.split(" (")[0] for f in failures}
 print(f"worst area error seen: {worst_seen:.4%}")
-print(f"{checked - len({f.split(':')[0] for f in failures})} passed, {len({f.split(':')[0] for f in failures})} failed")
+print(f"{count - len(failed_briefs)} passed, {len(failed_briefs)} failed")
 sys.exit(1 if failures else 0)
