@@ -1,6 +1,7 @@
 #include "cli_commands.h"
 
 #include "augment/augment.h"
+#include "brief/footprint_check.h"
 #include "io/project_io.h"
 
 #include <iomanip>
@@ -58,7 +59,11 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
         err << path << ": " << plan.summary << "\n";
         return exitInternal;
     }
-    const int code = plan.status == AugmentStatus::Compromised ? exitNoPlan : exitOk;
+    // Targets over the footprint, or rooms wider than it: reported first, and no plan can meet them.
+    std::vector<Diagnostic> diagnostics = footprintProblems(brief);
+    const bool fits = diagnostics.empty();
+    diagnostics.insert(diagnostics.end(), plan.diagnostics.begin(), plan.diagnostics.end());
+    const int code = plan.status == AugmentStatus::Compromised || !fits ? exitNoPlan : exitOk;
     const std::string u = brief.units;
     auto idsOf = [&](const std::vector<int>& rooms) {
         std::vector<std::string> ids;
@@ -69,7 +74,7 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
         OrderedJson j;
         j["file"] = path;
         j["status"] = toString(plan.status);
-        j["feasible"] = plan.status == AugmentStatus::Feasible;
+        j["feasible"] = plan.status == AugmentStatus::Feasible && fits;
         j["summary"] = plan.summary;
         j["rooms"] = s.rooms;
         j["adjacencies"] = {{"door", s.doors}, {"wall", s.walls}, {"must", s.musts},
@@ -84,7 +89,7 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
         j["unmetFacade"] = idsOf(plan.unmetFacade);
         j["spareSpaces"] = plan.extended.roomCount > 0 ? plan.extended.spareCount() : 0;
         OrderedJson diags = OrderedJson::array();
-        for (const Diagnostic& d : plan.diagnostics) {
+        for (const Diagnostic& d : diagnostics) {
             OrderedJson adjs = OrderedJson::array();
             for (int a : d.adjacencies)
                 adjs.push_back({brief.adjacencies[a].a, brief.adjacencies[a].b});
@@ -108,7 +113,7 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
         out << "  spare area:   " << fixed(s.footprintArea - s.targetArea) << " " << u << "² ("
             << fixed(100.0 * (s.footprintArea - s.targetArea) / s.footprintArea) << "%)\n";
     out << "\n" << plan.summary << "\n";
-    for (const Diagnostic& d : plan.diagnostics) {
+    for (const Diagnostic& d : diagnostics) {
         if (d.severity == Severity::Info && d.code == "added-contact") continue;
         out << "  " << toString(d.severity) << ": " << d.message << "\n";
     }

@@ -54,7 +54,7 @@ int main(int argc, char** argv) {
         QTimer::singleShot(300, &window, [&] {
             QElapsedTimer waited;
             waited.start();
-            while (window.planning() && waited.elapsed() < 60000) QApplication::processEvents(QEventLoop::AllEvents, 50);
+            while ((window.planning() || window.checking()) && waited.elapsed() < 60000) QApplication::processEvents(QEventLoop::AllEvents, 50);
             QApplication::processEvents();
             window.sketchView()->fitAll();
             const QString out = parser.value(shotOpt);
@@ -68,5 +68,7 @@ int main(int argc, char** argv) {
         return app.exec();
     }
     window.show();
+    // Work autosaved by a session that ended without closing is offered first.
+    QTimer::singleShot(0, &window, [&] { window.offerRecovery(); });
     return app.exec();
 }

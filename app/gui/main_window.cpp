@@ -1,38 +1,66 @@
 #include "main_window.h"
 
+#include "brief/brief_edit.h"
+#include "brief_panel.h"
 #include "caution.h"
+#include "document.h"
+#include "embed/straight_line_drawing.h"
+#include "io/csv_import.h"
 #include "io/project_io.h"
 #include "plan/plan_builder.h"
 #include "plan_view.h"
+#include "recovery.h"
 #include "sketch_view.h"
 
 #include <QtConcurrent/QtConcurrentRun>
 
+#include <QAction>
+#include <QActionGroup>
 #include <QApplication>
+#include <QCloseEvent>
 #include <QDockWidget>
 #include <QFileDialog>
 #include <QFileInfo>
-#include <QHeaderView>
 #include <QListWidget>
 #include <QMenuBar>
-#include <QMessageBox>
+#include <QSettings>
 #include <QSplitter>
 #include <QStatusBar>
-#include <QTableWidget>
+#include <QStyle>
+#include <QToolBar>
 
 // Resources of a static library must be registered by name, outside any namespace.
 static void initAbutResources() { Q_INIT_RESOURCE(abut); }
 
 namespace abut::gui {
 
-MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
+namespace {
+
+constexpr int maxRecent = 8;
+const char* recentKey = "recentFiles";
+
+QString displayName(const QString& path) {
+    return path.isEmpty() ? QObject::tr("Untitled") : QFileInfo(path).fileName();
+}
+
+} // namespace
+
+MainWindow::MainWindow(const MainWindowOptions& options, QWidget* parent)
+    : QMainWindow(parent), options_(options) {
     initAbutResources();
     setWindowIcon(QIcon(QStringLiteral(":/icons/abut.svg")));
-    sketch_ = new SketchView(this);
+    doc_ = new Document(this);
+    recovery_ = std::make_unique<Recovery>(options_.recoveryFolder);
 
+    ask = [this](const QString& title, const QString& text, QMessageBox::StandardButtons buttons) {
+        return QMessageBox::question(this, title, text, buttons);
+    };
+
+    sketch_ = new SketchView(this);
+    sketch_->setObjectName(QStringLiteral("sketch"));
+    sketch_->setDocument(doc_);
     planView_ = new PlanView(this);
-    planView_->showMessage(tr("Open a brief to see its plans."));
-    connect(&planner_, &QFutureWatcher<Plan>::finished, this, &MainWindow::planReady);
+    planView_->showMessage(tr("Add rooms and adjacencies, or open a brief, to see plans."));
 
     auto* split = new QSplitter(Qt::Horizontal, this);
     split->addWidget(sketch_);
@@ -42,46 +70,186 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
     split->setSizes({640, 640});
     setCentralWidget(split);
 
-    roomTable_ = new QTableWidget(this);
-    roomTable_->setColumnCount(6);
-    roomTable_->setHorizontalHeaderLabels(
-        {tr("Room"), tr("Category"), tr("Target area"), tr("Min width"), tr("Max aspect"),
-         tr("Facade")});
-    roomTable_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
-    roomTable_->horizontalHeader()->setStretchLastSection(true);
-    roomTable_->verticalHeader()->hide();
-    roomTable_->setEditTriggers(QAbstractItemView::NoEditTriggers);
+    panel_ = new BriefPanel(doc_, this);
     auto* briefDock = new QDockWidget(tr("Brief"), this);
     briefDock->setObjectName(QStringLiteral("briefDock"));
-    briefDock->setWidget(roomTable_);
+    briefDock->setWidget(panel_);
     addDockWidget(Qt::BottomDockWidgetArea, briefDock);
 
     diagnostics_ = new QListWidget(this);
+    diagnostics_->setObjectName(QStringLiteral("diagnostics"));
+    diagnostics_->setWordWrap(true);
+    diagnostics_->setToolTip(tr("What the live check found. Click an entry to select the rooms it names."));
     auto* diagDock = new QDockWidget(tr("Diagnostics"), this);
     diagDock->setObjectName(QStringLiteral("diagnosticsDock"));
     diagDock->setWidget(diagnostics_);
     addDockWidget(Qt::BottomDockWidgetArea, diagDock);
+    resizeDocks({briefDock, diagDock}, {760, 440}, Qt::Horizontal);
+    resizeDocks({briefDock}, {290}, Qt::Vertical);
 
-    buildMenus();
+    connect(doc_, &Document::briefChanged, this, &MainWindow::briefChanged);
+    connect(doc_, &Document::modifiedChanged, this, &MainWindow::updateTitle);
+    connect(doc_, &Document::pathChanged, this, &MainWindow::updateTitle);
+    connect(sketch_, &SketchView::addRoomRequested, this, &MainWindow::addRoomAt);
+    connect(sketch_, &SketchView::roomActivated, panel_, &BriefPanel::editRoomName);
+    connect(sketch_, &SketchView::message, this, &MainWindow::status);
+    connect(panel_, &BriefPanel::message, this, &MainWindow::status);
+    connect(sketch_, &SketchView::selectionChangedByUser, this,
+            [this](const QStringList& r, const QList<int>& a) { syncSelection(r, a, sketch_); });
+    connect(panel_, &BriefPanel::selectionChangedByUser, this,
+            [this](const QStringList& r, const QList<int>& a) { syncSelection(r, a, panel_); });
+    connect(diagnostics_, &QListWidget::itemClicked, this, &MainWindow::diagnosticClicked);
+
+    checkTimer_.setSingleShot(true);
+    checkTimer_.setInterval(options_.checkDelayMs);
+    connect(&checkTimer_, &QTimer::timeout, this, &MainWindow::startCheck);
+    connect(&checker_, &QFutureWatcher<LiveCheck>::finished, this, &MainWindow::checkReady);
+    planTimer_.setSingleShot(true);
+    planTimer_.setInterval(options_.planDelayMs);
+    connect(&planTimer_, &QTimer::timeout, this, &MainWindow::startPlanning);
+    connect(&planner_, &QFutureWatcher<Plan>::finished, this, &MainWindow::planReady);
+    if (options_.autosaveSeconds > 0) {
+        autosaveTimer_.setInterval(options_.autosaveSeconds * 1000);
+        connect(&autosaveTimer_, &QTimer::timeout, this, &MainWindow::autosaveNow);
+        autosaveTimer_.start();
+    }
+
+    buildActions();
     statusBar()->showMessage(tr("Ready"));
-    setWindowTitle(tr("Untitled — Abut"));
-    resize(1280, 800);
+    updateTitle();
+    resize(1280, 820);
 }
 
-void MainWindow::buildMenus() {
+MainWindow::~MainWindow() {
+    // Background work holds copies of the brief only; wait so nothing
+    // reports to a window that is gone.
+    checker_.waitForFinished();
+    planner_.waitForFinished();
+}
+
+const Brief& MainWindow::brief() const { return doc_->brief(); }
+
+void MainWindow::buildActions() {
+    auto make = [this](const QString& text, const char* name, const QString& tip, auto slot) {
+        auto* a = new QAction(text, this);
+        a->setObjectName(QString::fromLatin1(name));
+        a->setToolTip(tip);
+        a->setStatusTip(tip);
+        connect(a, &QAction::triggered, this, slot);
+        return a;
+    };
+
     QMenu* file = menuBar()->addMenu(tr("&File"));
-    file->addAction(tr("&Open…"), QKeySequence::Open, this, [this] {
-        const QString p = QFileDialog::getOpenFileName(this, tr("Open brief"), QString(),
-                                                       tr("Abut projects (*.abut.json)"));
-        if (!p.isEmpty()) openProject(p);
+    QAction* newA = make(tr("&New"), "newAction", tr("Start an empty brief"), [this] {
+        if (maybeSave()) newProject();
     });
+    newA->setShortcut(QKeySequence::New);
+    QAction* openA = make(tr("&Open…"), "openAction", tr("Open a brief (*.abut.json)"), [this] { openDialog(); });
+    openA->setShortcut(QKeySequence::Open);
+    recentMenu_ = new QMenu(tr("Open &Recent"), this);
+    connect(recentMenu_, &QMenu::aboutToShow, this, &MainWindow::fillRecentMenu);
+    QAction* saveA = make(tr("&Save"), "saveAction", tr("Save the brief"), [this] { save(); });
+    saveA->setShortcut(QKeySequence::Save);
+    QAction* saveAsA = make(tr("Save &As…"), "saveAsAction", tr("Save the brief under a new name"), [this] { saveAs(); });
+    saveAsA->setShortcut(QKeySequence::SaveAs);
+    QAction* importA = make(tr("&Import CSV…"), "importAction",
+                            tr("Add rooms from a room list, or adjacencies from a matrix, kept in a spreadsheet"),
+                            [this] { importDialog(); });
+    importA->setShortcut(QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_I));
+    QAction* quitA = make(tr("&Quit"), "quitAction", tr("Close Abut"), [this] { close(); });
+    quitA->setShortcut(QKeySequence::Quit);
+    file->addActions({newA, openA});
+    file->addMenu(recentMenu_);
     file->addSeparator();
-    file->addAction(tr("&Quit"), QKeySequence::Quit, qApp, &QApplication::closeAllWindows);
+    file->addActions({saveA, saveAsA});
+    file->addSeparator();
+    file->addAction(importA);
+    file->addSeparator();
+    file->addAction(quitA);
+
+    QMenu* edit = menuBar()->addMenu(tr("&Edit"));
+    QAction* undoA = doc_->undoStack()->createUndoAction(this, tr("&Undo"));
+    undoA->setShortcut(QKeySequence::Undo);
+    undoA->setObjectName(QStringLiteral("undoAction"));
+    QAction* redoA = doc_->undoStack()->createRedoAction(this, tr("&Redo"));
+    redoA->setShortcut(QKeySequence::Redo);
+    redoA->setObjectName(QStringLiteral("redoAction"));
+    QAction* addA = make(tr("&Add Room"), "addRoomAction", tr("Add a room at the centre of the sketch (or double-click the sketch)"),
+                         [this] { addRoomAt(sketch_->centreInSketch()); });
+    addA->setShortcut(QKeySequence(Qt::Key_Insert));
+    addA->setIcon(style()->standardIcon(QStyle::SP_FileDialogNewFolder));
+    QAction* connectA = new QAction(tr("&Connect Rooms"), this);
+    connectA->setObjectName(QStringLiteral("connectAction"));
+    connectA->setCheckable(true);
+    connectA->setShortcut(QKeySequence(Qt::Key_C));
+    connectA->setShortcutContext(Qt::WidgetShortcut);
+    connectA->setToolTip(tr("Drag from one room to another to make them adjacent (C)"));
+    connect(connectA, &QAction::toggled, sketch_, &SketchView::setConnectMode);
+    connect(sketch_, &SketchView::connectModeChanged, connectA, &QAction::setChecked);
+    QAction* kindA = make(tr("Door ↔ &Wall"), "kindAction", tr("Switch the selected adjacencies between door and wall (K)"),
+                          [this] { toggleKind(); });
+    kindA->setShortcut(QKeySequence(Qt::Key_K));
+    kindA->setShortcutContext(Qt::WidgetShortcut);
+    QAction* priorityA = make(tr("Must ↔ &Should"), "priorityAction",
+                              tr("Switch the selected adjacencies between must and should (P)"), [this] { togglePriority(); });
+    priorityA->setShortcut(QKeySequence(Qt::Key_P));
+    priorityA->setShortcutContext(Qt::WidgetShortcut);
+    QAction* deleteA = make(tr("&Delete"), "deleteAction", tr("Delete the selected rooms and adjacencies"),
+                            [this] { deleteSelection(); });
+    deleteA->setShortcut(QKeySequence::Delete);
+    deleteA->setShortcutContext(Qt::WidgetShortcut);
+    QAction* selectAllA = make(tr("Select &All"), "selectAllAction", tr("Select every room and adjacency in the sketch"), [this] {
+        QStringList ids;
+        for (const Room& r : brief().rooms) ids << QString::fromStdString(r.id);
+        QList<int> adj;
+        for (int i = 0; i < int(brief().adjacencies.size()); ++i) adj << i;
+        sketch_->selectItems(ids, adj);
+        syncSelection(ids, adj, sketch_);
+    });
+    selectAllA->setShortcut(QKeySequence::SelectAll);
+    selectAllA->setShortcutContext(Qt::WidgetShortcut);
+    edit->addActions({undoA, redoA});
+    edit->addSeparator();
+    edit->addActions({addA, connectA, kindA, priorityA, deleteA, selectAllA});
+    // Shortcuts of single keys work in the sketch only, not while typing in the table.
+    sketch_->addActions({connectA, kindA, priorityA, deleteA, selectAllA});
+
     QMenu* view = menuBar()->addMenu(tr("&View"));
-    view->addAction(tr("&Fit sketch"), this, [this] { sketch_->fitAll(); });
+    QAction* tidyA = make(tr("&Tidy Up Sketch"), "tidyAction",
+                          tr("Redraw the sketch without crossing lines (undoable)"), [this] { tidyUp(); });
+    tidyA->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_T));
+    QAction* fitA = make(tr("&Fit Sketch"), "fitAction", tr("Show the whole sketch"), [this] { sketch_->fitAll(); });
+    fitA->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_0));
+    QAction* zoomInA = make(tr("Zoom &In"), "zoomInAction", tr("Zoom into the sketch"), [this] { sketch_->zoomBy(1.25); });
+    zoomInA->setShortcut(QKeySequence::ZoomIn);
+    QAction* zoomOutA = make(tr("Zoom &Out"), "zoomOutAction", tr("Zoom out of the sketch"), [this] { sketch_->zoomBy(0.8); });
+    zoomOutA->setShortcut(QKeySequence::ZoomOut);
+    view->addActions({tidyA, fitA, zoomInA, zoomOutA});
+
     QMenu* help = menuBar()->addMenu(tr("&Help"));
     help->addAction(tr("&About Abut"), this, &MainWindow::showAbout);
+
+    QToolBar* tools = addToolBar(tr("Sketch"));
+    tools->setObjectName(QStringLiteral("sketchToolBar"));
+    tools->setToolButtonStyle(Qt::ToolButtonTextOnly);
+    tools->addActions({undoA, redoA});
+    tools->addSeparator();
+    tools->addActions({addA, connectA, kindA, priorityA, deleteA});
+    tools->addSeparator();
+    tools->addActions({tidyA, fitA});
+
+    // Right-click menu of the sketch.
+    auto* sep = new QAction(this);
+    sep->setSeparator(true);
+    sketch_->addActions({sep, tidyA});
 }
+
+void MainWindow::updateTitle() {
+    setWindowTitle(tr("%1[*] — Abut").arg(displayName(doc_->path())));
+    setWindowModified(doc_->isModified());
+}
+
+void MainWindow::status(const QString& text) { statusBar()->showMessage(text, 8000); }
 
 bool MainWindow::openProject(const QString& path, QStringList* errors) {
     const LoadResult r = loadProject(path.toStdString());
@@ -92,65 +260,323 @@ bool MainWindow::openProject(const QString& path, QStringList* errors) {
         else QMessageBox::warning(this, tr("Cannot open brief"), lines.join(QLatin1Char('\n')));
         return false;
     }
-    brief_ = r.brief;
-    path_ = path;
-    setWindowTitle(tr("%1 — Abut").arg(QFileInfo(path).fileName()));
-    refreshViews();
-    statusBar()->showMessage(tr("Opened %1: %n room(s)", nullptr, int(brief_.rooms.size()))
-                                 .arg(QFileInfo(path).fileName()));
+    Brief b = r.brief;
+    // Rooms a hand-written file left without a position get one; this is
+    // not an edit of the planner's, so the document stays unmodified.
+    placeUnsketchedRooms(b);
+    doc_->reset(b, QFileInfo(path).absoluteFilePath());
+    recovery_->discard();
+    autosavedRevision_ = doc_->revision();
+    sketch_->fitAll();
+    rememberRecent(QFileInfo(path).absoluteFilePath());
+    status(tr("Opened %1: %n room(s)", nullptr, int(b.rooms.size())).arg(displayName(path)));
     return true;
 }
 
-void MainWindow::refreshViews() {
-    sketch_->showBrief(brief_);
-    sketch_->fitAll();
-    roomTable_->setRowCount(static_cast<int>(brief_.rooms.size()));
-    const QString u = QString::fromStdString(brief_.units);
-    const QString u2 = u + QChar(0x00B2); // m², ft²
-    for (int i = 0; i < roomTable_->rowCount(); ++i) {
-        const Room& room = brief_.rooms[i];
-        QString facade;
-        if (room.facade.anySide) facade = tr("any");
-        for (Side s : allSides)
-            if (room.facade.has(s)) facade += QLatin1Char(sideLetter(s));
-        const QStringList cells{
-            QString::fromStdString(room.displayName()), QString::fromStdString(room.category),
-            tr("%1 %2").arg(room.area, 0, 'f', 1).arg(u2),
-            room.minWidth ? tr("%1 %2").arg(*room.minWidth, 0, 'f', 2).arg(u) : QString(),
-            room.maxAspect ? QString::number(*room.maxAspect, 'f', 1) : QString(), facade};
-        for (int c = 0; c < cells.size(); ++c)
-            roomTable_->setItem(i, c, new QTableWidgetItem(cells[c]));
+void MainWindow::newProject() {
+    doc_->reset(Brief{}, QString());
+    recovery_->discard();
+    autosavedRevision_ = doc_->revision();
+    planView_->showMessage(tr("Add rooms and adjacencies to see plans."));
+    status(tr("New brief: double-click the sketch to add a room."));
+}
+
+bool MainWindow::saveTo(const QString& path, QString* error) {
+    const SaveResult r = saveProject(doc_->brief(), path.toStdString());
+    if (!r.ok) {
+        const QString msg = tr("Could not save %1: %2. The previous file, if any, is unchanged.")
+                                .arg(path, QString::fromStdString(r.message));
+        if (error) *error = msg;
+        else QMessageBox::warning(this, tr("Cannot save"), msg);
+        return false;
     }
-    startPlanning();
+    doc_->markSaved(QFileInfo(path).absoluteFilePath());
+    recovery_->discard();
+    autosavedRevision_ = doc_->revision();
+    rememberRecent(QFileInfo(path).absoluteFilePath());
+    status(tr("Saved %1").arg(displayName(path)));
+    return true;
+}
+
+bool MainWindow::save() { return doc_->path().isEmpty() ? saveAs() : saveTo(doc_->path()); }
+
+bool MainWindow::saveAs() {
+    QString p = QFileDialog::getSaveFileName(this, tr("Save brief"), doc_->path(), tr("Abut briefs (*.abut.json)"));
+    if (p.isEmpty()) return false;
+    if (!p.endsWith(QStringLiteral(".abut.json"))) p += QStringLiteral(".abut.json");
+    return saveTo(p);
+}
+
+void MainWindow::openDialog() {
+    if (!maybeSave()) return;
+    const QString p = QFileDialog::getOpenFileName(this, tr("Open brief"), QFileInfo(doc_->path()).path(),
+                                                   tr("Abut briefs (*.abut.json);;All files (*)"));
+    if (!p.isEmpty()) openProject(p);
+}
+
+bool MainWindow::importCsv(const QString& path, QStringList* errors) {
+    const CsvImportResult r = importCsvFile(path.toStdString(), doc_->brief());
+    if (!r.ok()) {
+        QStringList lines;
+        for (const FileError& e : r.errors) lines << QString::fromStdString(e.toString());
+        if (errors) *errors = lines;
+        else QMessageBox::warning(this, tr("Cannot import"), tr("Nothing was imported.\n\n") + lines.join(QLatin1Char('\n')));
+        return false;
+    }
+    doc_->edit(r.layout == CsvLayout::RoomList ? tr("Import room list") : tr("Import adjacency matrix"), r.brief);
+    QStringList notes;
+    for (const std::string& n : r.notes) notes << QString::fromStdString(n);
+    status(notes.join(QLatin1Char(' ')));
+    sketch_->fitAll();
+    return true;
+}
+
+void MainWindow::importDialog() {
+    const QString p = QFileDialog::getOpenFileName(this, tr("Import room list or adjacency matrix"),
+                                                   QFileInfo(doc_->path()).path(), tr("CSV files (*.csv *.txt)"));
+    if (!p.isEmpty()) importCsv(p);
+}
+
+bool MainWindow::maybeSave() {
+    if (!doc_->isModified()) return true;
+    const auto answer = ask(tr("Unsaved changes"),
+                            tr("%1 has changes that are not saved. Save them?").arg(displayName(doc_->path())),
+                            QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
+    if (answer == QMessageBox::Save) return save();
+    return answer == QMessageBox::Discard;
+}
+
+void MainWindow::closeEvent(QCloseEvent* event) {
+    if (!maybeSave()) {
+        event->ignore();
+        return;
+    }
+    recovery_->discard();
+    event->accept();
+}
+
+void MainWindow::rememberRecent(const QString& path) {
+    QSettings settings;
+    QStringList recent = settings.value(QLatin1String(recentKey)).toStringList();
+    recent.removeAll(path);
+    recent.prepend(path);
+    while (recent.size() > maxRecent) recent.removeLast();
+    settings.setValue(QLatin1String(recentKey), recent);
+}
+
+void MainWindow::fillRecentMenu() {
+    recentMenu_->clear();
+    const QStringList recent = QSettings().value(QLatin1String(recentKey)).toStringList();
+    for (const QString& p : recent) {
+        QAction* a = recentMenu_->addAction(displayName(p), this, [this, p] {
+            if (maybeSave()) openProject(p);
+        });
+        a->setToolTip(p);
+        a->setEnabled(QFileInfo::exists(p));
+    }
+    if (recent.isEmpty()) recentMenu_->addAction(tr("(none yet)"))->setEnabled(false);
+}
+
+bool MainWindow::autosaveNow() {
+    if (!doc_->isModified() || doc_->revision() == autosavedRevision_) return false;
+    QString message;
+    if (!recovery_->autosave(doc_->brief(), doc_->path(), &message)) {
+        status(tr("Autosave failed: %1").arg(message));
+        return false;
+    }
+    autosavedRevision_ = doc_->revision();
+    return true;
+}
+
+bool MainWindow::offerRecovery() {
+    const QList<Recovery::Orphan> orphans = recovery_->orphans();
+    for (const Recovery::Orphan& o : orphans) {
+        const QString what = o.originalPath.isEmpty() ? tr("an untitled brief") : displayName(o.originalPath);
+        const auto answer = ask(tr("Recover unsaved work"),
+                                tr("Abut ended without closing while you were editing %1. Changes were autosaved "
+                                   "at %2. Restore them?\n\nNo discards the autosave; Cancel keeps it for later.")
+                                    .arg(what, QLocale().toString(o.saved, QLocale::ShortFormat)),
+                                QMessageBox::Yes | QMessageBox::No | QMessageBox::Cancel);
+        if (answer == QMessageBox::Cancel) continue;
+        if (answer == QMessageBox::No) {
+            Recovery::removeOrphan(o);
+            continue;
+        }
+        const LoadResult r = loadProject(o.file.toStdString());
+        if (!r.ok()) {
+            status(tr("The autosave could not be read: %1").arg(QString::fromStdString(r.errors.front().toString())));
+            continue;
+        }
+        doc_->reset(r.brief, o.originalPath, /*restored=*/true);
+        Recovery::removeOrphan(o);
+        autosavedRevision_ = 0;
+        autosaveNow(); // the restored work is this session's now
+        sketch_->fitAll();
+        status(tr("Restored the autosave of %1. Save it to keep it.").arg(what));
+        return true;
+    }
+    return false;
+}
+
+void MainWindow::briefChanged() {
+    checkTimer_.start();
+    planTimer_.start();
+    planPending_ = true;
+}
+
+void MainWindow::startCheck() {
+    if (checker_.isRunning()) {
+        checkTimer_.start(); // one at a time; try again when it is done
+        return;
+    }
+    const Brief brief = doc_->brief();
+    const quint64 revision = doc_->revision();
+    checker_.setFuture(QtConcurrent::run([brief, revision] { return runLiveCheck(brief, revision); }));
+}
+
+void MainWindow::checkReady() {
+    LiveCheck c = checker_.result();
+    if (c.revision != doc_->revision()) return; // stale: a newer check is queued
+    check_ = std::move(c);
+    sketch_->setMarks(check_.marks);
     diagnostics_->clear();
-    diagnostics_->addItem(tr("%n room(s), %1 adjacencies; target area %2 %3", nullptr,
-                             int(brief_.rooms.size()))
-                              .arg(brief_.adjacencies.size())
-                              .arg(brief_.totalTargetArea(), 0, 'f', 1)
-                              .arg(u2));
+    for (const Diagnostic& d : check_.diagnostics) {
+        const QString prefix = d.severity == Severity::Error     ? tr("Problem: ")
+                               : d.severity == Severity::Warning ? tr("Warning: ")
+                                                                 : QString();
+        auto* item = new QListWidgetItem(prefix + QString::fromStdString(d.message), diagnostics_);
+        item->setToolTip(QString::fromStdString(d.message));
+        QStringList rooms;
+        for (int r : d.rooms)
+            if (r >= 0 && r < int(brief().rooms.size())) rooms << QString::fromStdString(brief().rooms[r].id);
+        QList<int> adj(d.adjacencies.begin(), d.adjacencies.end());
+        item->setData(Qt::UserRole, rooms);
+        item->setData(Qt::UserRole + 1, QVariant::fromValue(adj));
+        item->setIcon(style()->standardIcon(d.severity == Severity::Error     ? QStyle::SP_MessageBoxCritical
+                                            : d.severity == Severity::Warning ? QStyle::SP_MessageBoxWarning
+                                                                              : QStyle::SP_MessageBoxInformation));
+    }
+}
+
+void MainWindow::diagnosticClicked(QListWidgetItem* item) {
+    const QStringList rooms = item->data(Qt::UserRole).toStringList();
+    const QList<int> adj = item->data(Qt::UserRole + 1).value<QList<int>>();
+    sketch_->selectItems(rooms, adj);
+    panel_->selectItems(rooms, adj);
+}
+
+void MainWindow::syncSelection(const QStringList& rooms, const QList<int>& adjacencies, QObject* from) {
+    if (syncing_) return;
+    syncing_ = true;
+    if (from != sketch_) sketch_->selectItems(rooms, adjacencies);
+    if (from != panel_) panel_->selectItems(rooms, adjacencies);
+    syncing_ = false;
 }
 
 void MainWindow::startPlanning() {
-    // Plans are computed off the UI thread; the window stays responsive.
-    planView_->showMessage(tr("Computing plans…"));
-    statusBar()->showMessage(tr("Computing plans…"));
-    const Brief brief = brief_;
+    if (planner_.isRunning()) return; // planReady() starts the next one
+    if (doc_->brief().rooms.empty()) {
+        planPending_ = false;
+        planView_->showMessage(tr("Add rooms and adjacencies to see plans."));
+        return;
+    }
+    planPending_ = false;
+    status(tr("Computing plans…"));
+    const Brief brief = doc_->brief();
+    plannedRevision_ = doc_->revision();
     planner_.setFuture(QtConcurrent::run([brief] { return buildPlan(brief); }));
 }
 
 void MainWindow::planReady() {
+    if (plannedRevision_ != doc_->revision() || planPending_) {
+        // The brief changed meanwhile: this plan is stale.
+        if (!planTimer_.isActive()) startPlanning();
+        return;
+    }
     plan_ = planner_.result();
-    for (const Diagnostic& d : plan_.diagnostics) {
-        if (d.code == "added-contact") continue;
-        auto* item = new QListWidgetItem(QString::fromStdString(d.message), diagnostics_);
-        item->setToolTip(item->text());
+    if (plan_.variants.empty()) planView_->showMessage(QString::fromStdString(plan_.summary));
+    else planView_->showPlan(doc_->brief(), plan_, 0);
+    status(QString::fromStdString(plan_.summary));
+}
+
+void MainWindow::addRoomAt(const QPointF& sketchPos) {
+    Brief b = doc_->brief();
+    QString name;
+    for (int k = int(b.rooms.size()) + 1;; ++k) {
+        name = tr("Room %1").arg(k);
+        bool taken = false;
+        for (const Room& r : b.rooms) taken |= QString::fromStdString(r.displayName()) == name;
+        if (!taken) break;
     }
-    if (plan_.variants.empty()) {
-        planView_->showMessage(QString::fromStdString(plan_.summary));
-    } else {
-        planView_->showPlan(brief_, plan_, 0);
+    Room room;
+    room.name = name.toStdString();
+    room.id = freshRoomId(b, room.name);
+    // A small room as a start: 12 m² or 130 ft² (about the same).
+    room.area = b.units == "ft" ? 130.0 : 12.0;
+    const EditResult r = addRoom(b, room, SketchPoint{sketchPos.x(), sketchPos.y()});
+    if (!r.ok()) {
+        status(QString::fromStdString(r.message));
+        return;
     }
-    statusBar()->showMessage(QString::fromStdString(plan_.summary));
+    doc_->edit(tr("Add room %1").arg(name), b);
+    const QString id = QString::fromStdString(room.id);
+    sketch_->selectItems({id}, {});
+    panel_->selectItems({id}, {});
+    status(tr("Added %1. Type its name in the brief table; C draws adjacencies.").arg(name));
+}
+
+void MainWindow::deleteSelection() {
+    const QStringList rooms = sketch_->selectedRooms();
+    const QList<int> adj = sketch_->selectedAdjacencies();
+    if (rooms.isEmpty() && adj.isEmpty()) return;
+    Brief b = doc_->brief();
+    removeAdjacencies(b, std::vector<int>(adj.begin(), adj.end()));
+    std::vector<std::string> ids;
+    for (const QString& id : rooms) ids.push_back(id.toStdString());
+    removeRooms(b, ids);
+    doc_->edit(rooms.isEmpty() ? tr("Delete %n adjacency(ies)", nullptr, int(adj.size()))
+                               : tr("Delete %n room(s)", nullptr, int(rooms.size())),
+               b);
+}
+
+void MainWindow::toggleKind() {
+    const QList<int> adj = sketch_->selectedAdjacencies();
+    if (adj.isEmpty()) {
+        status(tr("Select one or more adjacency lines first."));
+        return;
+    }
+    Brief b = doc_->brief();
+    bool allDoors = true;
+    for (int i : adj) allDoors &= b.adjacencies[i].kind == AdjacencyKind::Door;
+    for (int i : adj) b.adjacencies[i].kind = allDoors ? AdjacencyKind::Wall : AdjacencyKind::Door;
+    doc_->edit(allDoors ? tr("Make walls") : tr("Make doors"), b);
+}
+
+void MainWindow::togglePriority() {
+    const QList<int> adj = sketch_->selectedAdjacencies();
+    if (adj.isEmpty()) {
+        status(tr("Select one or more adjacency lines first."));
+        return;
+    }
+    Brief b = doc_->brief();
+    bool allMust = true;
+    for (int i : adj) allMust &= b.adjacencies[i].priority == Priority::Must;
+    for (int i : adj) b.adjacencies[i].priority = allMust ? Priority::Should : Priority::Must;
+    doc_->edit(allMust ? tr("Make should") : tr("Make must"), b);
+}
+
+void MainWindow::tidyUp() {
+    const TidyResult t = tidySketch(doc_->brief());
+    if (t.status == TidyStatus::Empty) return;
+    Brief b = doc_->brief();
+    for (std::size_t i = 0; i < b.rooms.size(); ++i) setSketchPosition(b, b.rooms[i].id, t.positions[i]);
+    doc_->edit(tr("Tidy up sketch"), b);
+    sketch_->fitAll();
+    if (t.status == TidyStatus::DrawnWithout)
+        status(tr("The brief is not planar: %n adjacency line(s) still cross; see Diagnostics.", nullptr,
+                  int(t.leftOut.size())));
+    else
+        status(tr("Sketch redrawn without crossings. Undo restores the previous drawing."));
 }
 
 void MainWindow::showAbout() {

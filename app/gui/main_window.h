@@ -1,49 +1,116 @@
 #pragma once
 
 #include "brief/brief.h"
+#include "live_check.h"
 #include "plan/plan.h"
 
 #include <QFutureWatcher>
 #include <QMainWindow>
+#include <QMessageBox>
+#include <QTimer>
+
+#include <functional>
+#include <memory>
 
 class QListWidget;
-class QTableWidget;
+class QListWidgetItem;
+class QMenu;
 
 namespace abut::gui {
 
+class BriefPanel;
+class Document;
 class PlanView;
+class Recovery;
 class SketchView;
+
+struct MainWindowOptions {
+    QString recoveryFolder;      // empty: Recovery::defaultFolder()
+    int autosaveSeconds = 60;    // 0: no autosave timer (autosaveNow() still works)
+    int checkDelayMs = 150;      // live check after the last edit
+    int planDelayMs = 600;       // plan computation after the last edit
+};
 
 class MainWindow : public QMainWindow {
     Q_OBJECT
 public:
-    explicit MainWindow(QWidget* parent = nullptr);
+    explicit MainWindow(const MainWindowOptions& options = {}, QWidget* parent = nullptr);
+    ~MainWindow() override;
 
     // Loads a project; on failure keeps the current one and either fills
     // `errors` (one line each) or, when it is null, shows them in a dialog.
     bool openProject(const QString& path, QStringList* errors = nullptr);
-    const Brief& brief() const { return brief_; }
+    bool saveTo(const QString& path, QString* error = nullptr);
+    bool importCsv(const QString& path, QStringList* errors = nullptr);
+    void newProject();
+
+    Document* document() const { return doc_; }
+    const Brief& brief() const;
     SketchView* sketchView() const { return sketch_; }
-    // True while plans are being computed in the background.
-    bool planning() const { return planner_.isRunning(); }
+    BriefPanel* briefPanel() const { return panel_; }
+    QListWidget* diagnosticsList() const { return diagnostics_; }
+    Recovery* recovery() const { return recovery_.get(); }
+    // True while plans or the live check are being computed in the background.
+    bool planning() const { return planner_.isRunning() || planPending_; }
+    bool checking() const { return checker_.isRunning() || checkTimer_.isActive(); }
+    const LiveCheck& lastCheck() const { return check_; }
+
+    // Questions to the planner go through this; tests replace it.
+    std::function<QMessageBox::StandardButton(const QString& title, const QString& text,
+                                              QMessageBox::StandardButtons buttons)> ask;
+
+    // Writes the recovery file now if anything changed since the last one.
+    bool autosaveNow();
+    // Offers the autosaves of sessions that ended without closing; true when one was restored.
+    bool offerRecovery();
 
 public slots:
     void showAbout();
+    void tidyUp();
+    void addRoomAt(const QPointF& sketchPos);
+    void deleteSelection();
+    void toggleKind();
+    void togglePriority();
+
+protected:
+    void closeEvent(QCloseEvent* event) override;
 
 private:
-    void buildMenus();
-    void refreshViews();
+    void buildActions();
+    bool maybeSave();
+    bool save();
+    bool saveAs();
+    void openDialog();
+    void importDialog();
+    void updateTitle();
+    void rememberRecent(const QString& path);
+    void fillRecentMenu();
+    void briefChanged();
+    void startCheck();
+    void checkReady();
     void startPlanning();
     void planReady();
+    void diagnosticClicked(QListWidgetItem* item);
+    void syncSelection(const QStringList& rooms, const QList<int>& adjacencies, QObject* from);
+    void status(const QString& text);
 
-    Brief brief_;
-    QString path_;
+    MainWindowOptions options_;
+    Document* doc_ = nullptr;
     SketchView* sketch_ = nullptr;
-    QTableWidget* roomTable_ = nullptr;
+    BriefPanel* panel_ = nullptr;
     QListWidget* diagnostics_ = nullptr;
     PlanView* planView_ = nullptr;
+    QMenu* recentMenu_ = nullptr;
+    std::unique_ptr<Recovery> recovery_;
+    quint64 autosavedRevision_ = 0;
+    QTimer autosaveTimer_, checkTimer_, planTimer_;
+    QFutureWatcher<LiveCheck> checker_;
     QFutureWatcher<Plan> planner_;
+    bool planPending_ = false;
+    quint64 plannedRevision_ = 0;
+    LiveCheck check_;
     Plan plan_;
+    bool syncing_ = false;
 };
 
 } // namespace abut::gui

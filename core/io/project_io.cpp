@@ -265,27 +265,6 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
                                           "rooms", "adjacencies", "sketch"});
 }
 
-// Checks across fields that only make sense once each field is valid.
-void checkFit(Reader& r, const Brief& brief) {
-    if (!brief.footprint) return;
-    const Footprint fp = *brief.footprint;
-    const double total = brief.totalTargetArea();
-    const double available = fp.width * fp.depth;
-    if (total > available * (1.0 + 1e-9)) {
-        r.error("/footprint", "the rooms' target areas add up to " + formatNumber(total) + " " +
-                                  brief.units + "², more than the footprint's " +
-                                  formatNumber(available) + " " + brief.units + "² (" +
-                                  formatNumber(fp.width) + " × " + formatNumber(fp.depth) + ")");
-    }
-    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
-        const Room& room = brief.rooms[i];
-        if (room.minWidth && *room.minWidth > std::max(fp.width, fp.depth))
-            r.error("/rooms/" + std::to_string(i) + "/minWidth",
-                    "room \"" + room.id + "\" needs a width of " + formatNumber(*room.minWidth) +
-                        " " + brief.units + ", wider than the footprint");
-    }
-}
-
 } // namespace
 
 LoadResult parseProject(const std::string& text, const std::string& fileName) {
@@ -338,7 +317,6 @@ LoadResult parseProject(const std::string& text, const std::string& fileName) {
         r.error("/version", "unknown version " + doc.at("version").dump());
     } else {
         readBody(r, doc, result.brief);
-        if (r.errors.empty()) checkFit(r, result.brief);
     }
     if (!r.errors.empty()) {
         result.status = LoadStatus::Invalid;

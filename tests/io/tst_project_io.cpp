@@ -1,6 +1,7 @@
 // Project file reading and writing: every valid file loads, every invalid file
 // is refused with its expected message, and load → save → load is stable.
 #include "io/atomic_file.h"
+#include "brief/footprint_check.h"
 #include "io/project_io.h"
 
 #include <QDir>
@@ -34,6 +35,8 @@ private slots:
     void validFileLoads();
     void invalidFileRefused_data();
     void invalidFileRefused();
+    void infeasibleBriefLoadsAndIsReported_data();
+    void infeasibleBriefLoadsAndIsReported();
     void sampleLoads_data();
     void sampleLoads();
     void canonicalFileIsByteStable();
@@ -87,6 +90,33 @@ void TestProjectIo::invalidFileRefused() {
     QVERIFY2(!first.contains('\n'), qPrintable(first));
     QVERIFY2(first.startsWith(path), qPrintable(first));
     QVERIFY2(first.contains(expected), qPrintable(first + "\n  expected: " + expected));
+}
+
+// Targets over the footprint or rooms wider than it: a valid file (the
+// planner may be half-way through editing), reported by footprintProblems.
+void TestProjectIo::infeasibleBriefLoadsAndIsReported_data() {
+    QTest::addColumn<QString>("path");
+    QTest::addColumn<QString>("expected");
+    const QDir dir(dataDir() + "/infeasible");
+    const auto files = dir.entryInfoList({"*.abut.json"});
+    QVERIFY(files.size() >= 2);
+    for (const QFileInfo& fi : files) {
+        const QString expectPath = dir.filePath(fi.fileName().replace(".abut.json", ".expect"));
+        QTest::newRow(qPrintable(fi.fileName()))
+            << fi.absoluteFilePath() << QString::fromStdString(readAll(expectPath)).trimmed();
+    }
+}
+
+void TestProjectIo::infeasibleBriefLoadsAndIsReported() {
+    QFETCH(QString, path);
+    QFETCH(QString, expected);
+    const LoadResult r = loadProject(path.toStdString());
+    QVERIFY2(r.ok(), joined(r.errors).c_str());
+    const std::vector<Diagnostic> problems = footprintProblems(r.brief);
+    QVERIFY(!problems.empty());
+    QCOMPARE(problems.front().severity, Severity::Error);
+    QVERIFY2(QString::fromStdString(problems.front().message).contains(expected),
+             problems.front().message.c_str());
 }
 
 void TestProjectIo::sampleLoads_data() {
