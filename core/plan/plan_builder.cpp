@@ -296,7 +296,12 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
         if (!checkVariant(brief, plan.footprint, candidate).empty()) continue; // keep the fitted one
         v = std::move(candidate);
     }
-    std::stable_sort(plan.variants.begin(), plan.variants.end(), byScore);
+    // A sized variant has its unmet requirements worked out; a merely fitted
+    // one does not, so it must never be offered ahead of a sized one.
+    auto sizedFirst = [](const PlanVariant& a, const PlanVariant& b) {
+        return a.sized != b.sized ? a.sized : a.score < b.score;
+    };
+    std::stable_sort(plan.variants.begin(), plan.variants.end(), sizedFirst);
     // Local search over the lattice: flip one alternating 4-cycle at a time
     // and keep the flip when the sized layout gets closer to the targets.
     const std::size_t toImprove = std::min<std::size_t>(plan.variants.size(), options.improvedCandidates);
@@ -371,7 +376,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
         candidate.oneSided = isOneSided(v.extended, rel);
         if (checkVariant(brief, plan.footprint, candidate).empty() && candidate.score <= v.score) v = std::move(candidate);
     }
-    std::stable_sort(plan.variants.begin(), plan.variants.end(), byScore);
+    std::stable_sort(plan.variants.begin(), plan.variants.end(), sizedFirst);
     // The same rectangles reached twice (two labelings of graphs that differ
     // only by an added contact can coincide) count once.
     auto same = [](const PlanVariant& a, const PlanVariant& b) {
