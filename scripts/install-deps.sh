@@ -7,6 +7,8 @@ set -euo pipefail
 packages=(
   # build
   build-essential cmake pkg-config git
+  # sanitizer build and fuzzing (clang with libFuzzer)
+  clang libclang-rt-14-dev
   # libraries
   qt6-base-dev qt6-base-dev-tools qt6-svg-dev libqt6svg6 qt6-qpa-plugins
   libgl-dev libvulkan-dev libxkbcommon-dev

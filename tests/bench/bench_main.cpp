@@ -5,6 +5,9 @@
 //   abut_bench augment    brief → extended graph
 //   abut_bench labelings  enumeration speed against one checker pass
 //   abut_bench sizing     re-sizing time, cold and warm
+//   abut_bench gui        the editor's worst event-loop delay while it
+//                         computes the plans of the largest sample
+//                         (offscreen; only when built with the editor)
 // Targets (not enforced here): linear scaling, and the pipeline at most 3× the
 // planarity test.
 #include "augment/augment.h"
@@ -18,6 +21,16 @@
 #include <boost/graph/adjacency_list.hpp>
 #include <boost/graph/boyer_myrvold_planar_test.hpp>
 
+#ifdef ABUT_BENCH_GUI
+#include "main_window.h"
+
+#include <QApplication>
+#include <QElapsedTimer>
+#include <QTemporaryDir>
+#include <QTimer>
+#endif
+
+#include <algorithm>
 #include <chrono>
 #include <cstdio>
 #include <string>
@@ -143,11 +156,56 @@ void sizing() {
 
 } // namespace
 
+#ifdef ABUT_BENCH_GUI
+// A 2 ms timer on the UI thread records how late it fires while the editor
+// opens the largest sample and computes its plans in the background. The
+// worst delay is what a planner would feel as a freeze.
+void guiLatency(int argc, char** argv) {
+    qputenv("QT_QPA_PLATFORM", "offscreen");
+    QApplication app(argc, argv);
+    QTemporaryDir recovery;
+    abut::gui::MainWindowOptions o;
+    o.recoveryFolder = recovery.path();
+    o.autosaveSeconds = 0;
+    abut::gui::MainWindow w(o);
+    w.resize(1400, 900);
+    w.show();
+    QElapsedTimer clock;
+    clock.start();
+    qint64 last = clock.elapsed(), worst = 0;
+    std::vector<qint64> gaps;
+    QTimer tick;
+    tick.setInterval(2);
+    QObject::connect(&tick, &QTimer::timeout, [&] {
+        const qint64 now = clock.elapsed();
+        gaps.push_back(now - last);
+        worst = std::max(worst, now - last);
+        last = now;
+    });
+    tick.start();
+    const auto t0 = Clock::now();
+    w.openProject(QStringLiteral(ABUT_SAMPLES "/office-floor.abut.json"));
+    last = clock.elapsed();
+    const qint64 openMs = clock.elapsed();
+    while (w.planning() || w.checking()) QCoreApplication::processEvents(QEventLoop::AllEvents, 5);
+    const double total = seconds(t0, Clock::now());
+    std::sort(gaps.begin(), gaps.end());
+    const qint64 p99 = gaps.empty() ? 0 : gaps[gaps.size() * 99 / 100];
+    std::printf("gui/open_office_floor: %lld ms\n", static_cast<long long>(openMs));
+    std::printf("gui/plans_office_floor: %.2f s\n", total);
+    std::printf("gui/event_loop_worst_delay: %lld ms\n", static_cast<long long>(worst));
+    std::printf("gui/event_loop_p99_delay: %lld ms\n", static_cast<long long>(p99));
+}
+#endif
+
 int main(int argc, char** argv) {
     const std::string only = argc > 1 ? argv[1] : "";
     if (only.empty() || only == "pipeline") pipeline();
     if (only.empty() || only == "augment") augment();
     if (only.empty() || only == "labelings") labelings();
     if (only.empty() || only == "sizing") sizing();
+#ifdef ABUT_BENCH_GUI
+    if (only.empty() || only == "gui") guiLatency(argc, argv);
+#endif
     return 0;
 }
