@@ -6,6 +6,7 @@
 #include "io/atomic_file.h"
 #include "io/project_io.h"
 #include "plan/plan_builder.h"
+#include "export_plan.h"
 #include "sheet.h"
 
 #include <QFileInfo>
@@ -106,40 +107,16 @@ int runExport(const std::vector<std::string>& args, std::ostream& out, std::ostr
         return exitBadInput;
     }
     const PlanVariant& v = plan.variants[variant - 1];
-    std::string text;
-    if (ext == "dxf") text = planDxf(brief, plan.footprint, v, dxf);
-    else if (ext == "svg") text = planSvg(brief, plan.footprint, v);
-    else if (ext == "csv") text = scheduleCsv(areaSchedule(brief, plan.footprint, v));
-    if (!text.empty()) {
-        const WriteResult w = writeFileAtomically(target, text);
-        if (!w.ok) {
-            err << w.message << "\n";
-            return exitBadInput;
-        }
-    } else {
-        ensureGuiApplication();
-        QString error;
-        // Write beside the target and rename, like every other output.
-        const QString temp = QString::fromStdString(target) + QStringLiteral(".part");
-        bool ok = false;
-        if (ext == "pdf") {
-            sheet.project = QFileInfo(QString::fromStdString(path)).completeBaseName().section('.', 0, 0);
-            sheet.variantRank = variant;
-            ok = render::writePdfSheet(temp, brief, plan, v, sheet, &error);
-        } else {
-            const double ppu = std::clamp(1600.0 / std::max(plan.footprint.width, plan.footprint.depth), 20.0, 200.0);
-            ok = render::planImage(brief, plan.footprint, v, ppu).save(temp, "PNG");
-            if (!ok) error = QString::fromStdString(target) + QStringLiteral(": cannot write the image");
-        }
-        if (ok && std::rename(temp.toStdString().c_str(), target.c_str()) != 0) {
-            ok = false;
-            error = QString::fromStdString(target) + QStringLiteral(": cannot replace the file");
-        }
-        if (!ok) {
-            std::remove(temp.toStdString().c_str());
-            err << error.toStdString() << "\n";
-            return exitBadInput;
-        }
+    if (ext == "pdf" || ext == "png") ensureGuiApplication();
+    render::ExportOptions eo;
+    eo.sheet = sheet;
+    eo.sheet.project = QFileInfo(QString::fromStdString(path)).completeBaseName().section('.', 0, 0);
+    eo.sheet.variantRank = variant;
+    eo.dxf = dxf;
+    QString error;
+    if (!render::exportVariant(QString::fromStdString(target), brief, plan, v, eo, &error)) {
+        err << error.toStdString() << "\n";
+        return exitBadInput;
     }
     out << target << ": variant " << variant << " of " << plan.variants.size() << "\n";
     return exitOk;

@@ -116,13 +116,19 @@ bool writePdfSheet(const QString& path, const Brief& brief, const Plan& plan, co
     pdf.setResolution(600);
     pdf.setTitle(o.project + QStringLiteral(" — plan"));
     pdf.setCreator(QStringLiteral("Abut"));
-    QPainter p;
-    if (!p.begin(&pdf)) {
+    if (!paintSheet(pdf, 600, brief, plan, v, o)) {
         if (error) *error = path + QStringLiteral(": cannot write the PDF");
         return false;
     }
-    const double dpmm = 600.0 / 25.4;
-    const QSizeF pageMm = QPageSize(id).size(QPageSize::Millimeter).transposed();
+    return true;
+}
+
+bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, const Plan& plan,
+                const PlanVariant& v, const SheetOptions& o) {
+    QPainter p;
+    if (!p.begin(&device)) return false;
+    const double dpmm = dotsPerInch / 25.4;
+    const QSizeF pageMm = device.pageLayout().fullRect(QPageLayout::Millimeter).size();
     auto mm = [&](double x, double y, double w, double h) { return QRectF(x * dpmm, y * dpmm, w * dpmm, h * dpmm); };
     const double W = pageMm.width(), H = pageMm.height();
     const double margin = 10, side = std::max(100.0, W * 0.33);
@@ -228,11 +234,7 @@ bool writePdfSheet(const QString& path, const Brief& brief, const Plan& plan, co
                             QStringLiteral("Drawn with Abut — schematic plan")};
     for (int k = 0; k < lines.size(); ++k)
         p.drawText(mm(x0 + 3, ty + 13 + 6 * k, colW, 6), Qt::AlignLeft | Qt::AlignVCenter, lines[k]);
-    if (!p.end()) {
-        if (error) *error = path + QStringLiteral(": writing the PDF failed");
-        return false;
-    }
-    return true;
+    return p.end();
 }
 
 } // namespace abut::render

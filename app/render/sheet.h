@@ -9,6 +9,7 @@
 #include <QImage>
 #include <QString>
 
+class QPagedPaintDevice;
 class QPainter;
 class QRectF;
 
@@ -32,6 +33,11 @@ int chooseScale(double widthMm, double depthMm, double boxW, double boxH);
 
 bool writePdfSheet(const QString& path, const Brief& brief, const Plan& plan, const PlanVariant& v,
                    const SheetOptions& options, QString* error);
+
+// The same sheet on any paged device (a printer): its page size and
+// orientation as set, at `dotsPerInch`. False when painting cannot start.
+bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, const Plan& plan,
+                const PlanVariant& v, const SheetOptions& options);
 
 // The plan alone, north up, `pixelsPerUnit` pixels per metre (or foot).
 QImage planImage(const Brief& brief, const Footprint& footprint, const PlanVariant& v, double pixelsPerUnit);

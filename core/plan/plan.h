@@ -39,7 +39,13 @@ struct PlanVariant {
     RegularEdgeLabeling labeling;
 };
 
-enum class PlanStatus { Ok, Compromised, NoPlan, Internal };
+enum class PlanStatus {
+    Ok,          // every must adjacency and facade wish kept
+    Compromised, // the best variant gives some up
+    NoPlan,      // nothing to plan (no rooms)
+    Internal,    // a result failed its own checker: a bug, reported
+    Cancelled    // stopped by the caller; the variants found so far are kept
+};
 const char* toString(PlanStatus s);
 
 struct Plan {

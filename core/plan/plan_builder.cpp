@@ -15,6 +15,7 @@ const char* toString(PlanStatus s) {
     case PlanStatus::Compromised: return "compromised";
     case PlanStatus::NoPlan: return "no-plan";
     case PlanStatus::Internal: return "internal-error";
+    case PlanStatus::Cancelled: return "cancelled";
     }
     return "?";
 }
@@ -223,8 +224,14 @@ std::string checkVariant(const Brief& brief, const Footprint& fp, const PlanVari
     return {};
 }
 
-Plan buildPlan(const Brief& brief, const PlanOptions& options) {
+Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor* monitor) {
     Plan plan;
+    bool stopped = false;
+    // Progress: labelings 0–0.3, sizing 0.3–0.7, improving 0.7–1.
+    auto keepGoing = [&](double done, const char* step) {
+        if (!stopped && monitor && monitor->progress && !monitor->progress(done, step)) stopped = true;
+        return !stopped;
+    };
     plan.units = brief.units;
     plan.footprint = brief.effectiveFootprint();
     const AugmentResult aug = buildExtendedGraph(brief);
@@ -256,7 +263,9 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
     // budget still samples every corner assignment.
     const int perGraph = std::max(1, std::min(options.labelingsPerGraph,
                                               options.layoutBudget / static_cast<int>(graphs.size())));
-    for (const ExtendedGraph& x : graphs) {
+    for (std::size_t g = 0; g < graphs.size(); ++g) {
+        if (!keepGoing(0.3 * double(g) / double(graphs.size()), "arrangements")) break;
+        const ExtendedGraph& x = graphs[g];
         const LabelingResult r = computeRegularEdgeLabeling(x);
         const LabelingCheck c = r.status == LabelingStatus::Ok ? checkRegularEdgeLabeling(x, r.labeling)
                                                                : LabelingCheck{false, r.message};
@@ -290,11 +299,13 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
     sizing.grid = options.grid;
     const std::size_t toSize = std::min<std::size_t>(plan.variants.size(), options.sizedCandidates);
     for (std::size_t i = 0; i < toSize; ++i) {
+        if (!keepGoing(0.3 + 0.4 * double(i) / double(toSize), "sizing")) break;
         PlanVariant& v = plan.variants[i];
         const SizingProblem problem(brief, v.extended, v.labeling, plan.footprint, sizing);
         PlanVariant candidate = withSizes(brief, plan.footprint, v, problem.solve());
         if (!checkVariant(brief, plan.footprint, candidate).empty()) continue; // keep the fitted one
         v = std::move(candidate);
+        if (monitor && monitor->found) monitor->found(v);
     }
     // A sized variant has its unmet requirements worked out; a merely fitted
     // one does not, so it must never be offered ahead of a sized one.
@@ -308,6 +319,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
     const int budget = options.flipBudget > 0 ? options.flipBudget : 40 + 2 * static_cast<int>(brief.rooms.size());
     std::mt19937 rng(options.seed);
     for (std::size_t i = 0; i < toImprove; ++i) {
+        if (!keepGoing(0.7 + 0.3 * double(i) / double(toImprove), "improving")) break;
         PlanVariant& v = plan.variants[i];
         if (!v.sized) continue;
         const std::vector<FourCycle> cycles = fourCycles(v.extended);
@@ -334,7 +346,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
             improved = false;
             std::shuffle(order.begin(), order.end(), rng);
             for (int c : order) {
-                if (cheap >= cheapBudget) break;
+                if (cheap >= cheapBudget || !keepGoing(0.7 + 0.3 * (double(i) + 0.5 * cheap / cheapBudget) / double(toImprove), "improving")) break;
                 const std::optional<Turn> sense = flipSense(v.extended, rel, cycles[c]);
                 if (!sense) continue;
                 flip(v.extended, rel, cycles[c], *sense);
@@ -355,7 +367,9 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
             improved = false;
             std::shuffle(order.begin(), order.end(), rng);
             for (int c : order) {
-                if (evaluations >= budget) break;
+                if (evaluations >= budget ||
+                    !keepGoing(0.7 + 0.3 * (double(i) + 0.5 + 0.5 * evaluations / budget) / double(toImprove), "improving"))
+                    break;
                 const std::optional<Turn> sense = flipSense(v.extended, rel, cycles[c]);
                 if (!sense) continue;
                 RegularEdgeLabeling trial = rel;
@@ -374,7 +388,10 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
         relabelled.labeling = rel;
         PlanVariant candidate = withSizes(brief, plan.footprint, relabelled, best);
         candidate.oneSided = isOneSided(v.extended, rel);
-        if (checkVariant(brief, plan.footprint, candidate).empty() && candidate.score <= v.score) v = std::move(candidate);
+        if (checkVariant(brief, plan.footprint, candidate).empty() && candidate.score <= v.score) {
+            v = std::move(candidate);
+            if (monitor && monitor->found) monitor->found(v);
+        }
     }
     std::stable_sort(plan.variants.begin(), plan.variants.end(), sizedFirst);
     // The same rectangles reached twice (two labelings of graphs that differ
@@ -387,6 +404,11 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
                 return false;
         return true;
     };
+    if (plan.variants.empty()) { // stopped before the first layout
+        plan.status = stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
+        plan.summary = stopped ? "Stopped before any variant was found." : aug.summary;
+        return plan;
+    }
     std::vector<PlanVariant> kept;
     for (PlanVariant& v : plan.variants) {
         if (static_cast<int>(kept.size()) >= options.variants) break;
@@ -403,8 +425,9 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options) {
                                     std::to_string(v.metrics.shortDoorWalls) +
                                         " door adjacency(ies) get less than a door's width of wall in the footprint.",
                                     {}, {}});
-    plan.status = mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
-    plan.summary = aug.summary;
+    plan.status = stopped ? PlanStatus::Cancelled : mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
+    plan.summary = stopped ? "Stopped: " + std::to_string(plan.variants.size()) + " variant(s) found so far." : aug.summary;
+    if (!stopped) keepGoing(1.0, "done");
     return plan;
 }
 

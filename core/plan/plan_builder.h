@@ -14,9 +14,22 @@
 
 #include "plan/plan.h"
 
+#include <functional>
+#include <string>
+
 namespace abut {
 
-Plan buildPlan(const Brief& brief, const PlanOptions& options = {});
+// Watching and steering a long computation (the editor runs it on a worker
+// thread). Both are called on the computing thread.
+struct PlanMonitor {
+    // Share done (0..1) and the step under way; return false to stop: the
+    // plan then has status Cancelled and keeps the variants found so far.
+    std::function<bool(double done, const std::string& step)> progress;
+    // Each variant once it is sized (provisional; the final plan re-ranks).
+    std::function<void(const PlanVariant& variant)> found;
+};
+
+Plan buildPlan(const Brief& brief, const PlanOptions& options = {}, const PlanMonitor* monitor = nullptr);
 
 // One variant from a given extended graph and labeling. Its dropped
 // adjacencies are those `x` does not join, plus doors left too short.

@@ -1,5 +1,6 @@
 #include "size/segment_sizing.h"
 
+#include <cstdio>
 #include <Eigen/Sparse>
 #include <Eigen/SparseCholesky>
 
@@ -328,10 +329,27 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
     result.x = c.x;
     result.y = c.y;
     result.objective = objective();
+    describe(result);
+    return result;
+}
+
+namespace {
+std::string shortNumber(double v) {
+    char buf[32];
+    std::snprintf(buf, sizeof buf, "%.1f", v);
+    return buf;
+}
+} // namespace
+
+void SizingProblem::describe(SizingResult& result) const {
+    const SegmentStructure& s = segs_;
+    const int n = x_.graph.vertexCount();
+    const std::vector<double>& cx = result.x;
+    const std::vector<double>& cy = result.y;
     result.rects.resize(n);
     for (int v = 0; v < n; ++v)
         if (!x_.isPole(v))
-            result.rects[v] = {c.x[s.west[v]], c.y[s.south[v]], c.x[s.east[v]], c.y[s.north[v]]};
+            result.rects[v] = {cx[s.west[v]], cy[s.south[v]], cx[s.east[v]], cy[s.north[v]]};
     result.rooms.resize(brief_.rooms.size());
     for (std::size_t i = 0; i < brief_.rooms.size(); ++i) {
         const Rect& q = result.rects[i];
@@ -342,8 +360,8 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
         const Room& room = brief_.rooms[i];
         if (std::abs(rs.deviation) > 0.01)
             result.unmet.push_back({"area", static_cast<int>(i), -1, target_[i], rs.area,
-                                    room.displayName() + " gets " + std::to_string(rs.area) + " instead of " +
-                                        std::to_string(target_[i])});
+                                    room.displayName() + " gets " + shortNumber(rs.area) + " instead of " +
+                                        shortNumber(target_[i])});
         if (room.minWidth && std::min(q.width(), q.depth()) < *room.minWidth - 1e-9)
             result.unmet.push_back({"minWidth", static_cast<int>(i), -1, *room.minWidth,
                                     std::min(q.width(), q.depth()), room.displayName() + " is narrower than its minimum width"});
@@ -354,11 +372,31 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
     for (std::size_t i = 0; i < segs_.walls.size(); ++i) {
         const auto& wall = segs_.walls[i];
         if (wallMin_[i] <= options_.anyWall) continue;
-        const double len = wall.vertical ? c.y[wall.to] - c.y[wall.from] : c.x[wall.to] - c.x[wall.from];
+        const double len = wall.vertical ? cy[wall.to] - cy[wall.from] : cx[wall.to] - cx[wall.from];
         if (len < wallMin_[i] - 1e-9)
             result.unmet.push_back({"doorWall", wall.u, wall.v, wallMin_[i], len, "a door wall is shorter than a door"});
     }
-    return result;
+}
+
+SizingResult SizingProblem::evaluate(std::vector<double> x, std::vector<double> y) const {
+    SizingResult r;
+    r.x = std::move(x);
+    r.y = std::move(y);
+    describe(r);
+    return r;
+}
+
+SizingResult SizingProblem::stateOf(const std::vector<Rect>& rects) const {
+    const SegmentStructure& s = segs_;
+    std::vector<double> x(s.verticalCount, 0.0), y(s.horizontalCount, 0.0);
+    for (int v = 0; v < x_.graph.vertexCount() && v < static_cast<int>(rects.size()); ++v) {
+        if (x_.isPole(v)) continue;
+        x[s.west[v]] = rects[v].x0;
+        x[s.east[v]] = rects[v].x1;
+        y[s.south[v]] = rects[v].y0;
+        y[s.north[v]] = rects[v].y1;
+    }
+    return evaluate(std::move(x), std::move(y));
 }
 
 std::pair<double, double> SizingProblem::segmentRange(const SizingResult& current, bool vertical, int segment) const {

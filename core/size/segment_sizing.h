@@ -89,6 +89,13 @@ public:
     // (kept where still strictly feasible).
     SizingResult solve(const SizingResult* start = nullptr) const;
 
+    // The layout, room sizes and unmet requirements of given segment
+    // positions (no optimisation): for a drag that moves one segment.
+    SizingResult evaluate(std::vector<double> x, std::vector<double> y) const;
+    // The segment positions of a layout given as rectangles per vertex of the
+    // extended graph (as a plan variant stores them), evaluated.
+    SizingResult stateOf(const std::vector<Rect>& rects) const;
+
     // How far segment `segment` (vertical or horizontal) can move with every
     // other segment where `current` has it, keeping all hard requirements.
     std::pair<double, double> segmentRange(const SizingResult& current, bool vertical, int segment) const;
@@ -103,6 +110,7 @@ private:
     // room or spare whose extent it is (−1 for a wall).
     struct Gap { bool vertical; int from, to; double min; int vertex = -1; };
     std::vector<Gap> gaps() const;
+    void describe(SizingResult& result) const; // rects, room sizes, unmet from result.x, result.y
 
     const Brief& brief_;
     const ExtendedGraph& x_;

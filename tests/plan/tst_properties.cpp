@@ -1,4 +1,4 @@
-// Property run over 10,000 random briefs with fixed seeds: 1–200 rooms,
+// Property run over 10,000 random briefs with fixed seeds (20 batches): 1–200 rooms,
 // random facade wishes, door/wall and must/should mixes, some non-planar
 // (extra random adjacencies), some disconnected, some with targets far over
 // the footprint or rooms wider than it, some with random sketches. For each:
@@ -88,10 +88,25 @@ Brief propertyBrief(std::mt19937& rng, Mix& mix) {
 class TestProperties : public QObject {
     Q_OBJECT
 private slots:
-    void randomBriefsPlanOrExplain() {
-        const int count = qEnvironmentVariableIsSet("ABUT_PROPERTY_BRIEFS")
+    // Twenty batches of 500 briefs (ABUT_PROPERTY_BATCH), each with its own
+    // seed, so that every batch stays well inside Qt Test's per-function
+    // time limit.
+    void randomBriefsPlanOrExplain_data() {
+        QTest::addColumn<unsigned>("seed");
+        QTest::addColumn<int>("count");
+        const int total = qEnvironmentVariableIsSet("ABUT_PROPERTY_BRIEFS")
                               ? qEnvironmentVariableIntValue("ABUT_PROPERTY_BRIEFS")
                               : 10000;
+        const int size = qEnvironmentVariableIsSet("ABUT_PROPERTY_BATCH")
+                             ? std::max(1, qEnvironmentVariableIntValue("ABUT_PROPERTY_BATCH"))
+                             : 500;
+        for (int done = 0, batch = 0; done < total; done += size, ++batch)
+            QTest::newRow(qPrintable(QString("batch %1").arg(batch)))
+                << unsigned(20261201 + batch) << std::min(size, total - done);
+    }
+    void randomBriefsPlanOrExplain() {
+        QFETCH(unsigned, seed);
+        QFETCH(int, count);
         PlanOptions light;
         light.variants = 2;
         light.cornerTrials = 1;
@@ -99,7 +114,7 @@ private slots:
         light.labelingsPerGraph = 2;
         light.sizedCandidates = 1;
         light.improvedCandidates = 0;
-        std::mt19937 rng(20261201);
+        std::mt19937 rng(seed);
         Mix mix;
         int withPlan = 0, withoutPlan = 0, variantsChecked = 0;
         double slowest = 0;

@@ -1,0 +1,60 @@
+#include "export_plan.h"
+
+#include "export/schedule.h"
+#include "export/svg_writer.h"
+#include "io/atomic_file.h"
+
+#include <QFile>
+#include <QFileInfo>
+
+#include <algorithm>
+#include <cstdio>
+
+namespace abut::render {
+
+QString exportFormat(const QString& path) {
+    const QString ext = QFileInfo(path).suffix().toLower();
+    for (const char* known : {"dxf", "pdf", "svg", "png", "csv"})
+        if (ext == QLatin1String(known)) return ext;
+    return {};
+}
+
+bool exportVariant(const QString& target, const Brief& brief, const Plan& plan, const PlanVariant& v,
+                   const ExportOptions& options, QString* error) {
+    const QString format = exportFormat(target);
+    auto fail = [&](const QString& why) {
+        if (error) *error = why;
+        return false;
+    };
+    if (format.isEmpty())
+        return fail(target + QStringLiteral(": unknown format; use .dxf, .pdf, .svg, .png or .csv"));
+    std::string text;
+    if (format == QLatin1String("dxf")) text = planDxf(brief, plan.footprint, v, options.dxf);
+    else if (format == QLatin1String("svg")) text = planSvg(brief, plan.footprint, v);
+    else if (format == QLatin1String("csv")) text = scheduleCsv(areaSchedule(brief, plan.footprint, v));
+    if (!text.empty()) {
+        const WriteResult w = writeFileAtomically(target.toStdString(), text);
+        return w.ok || fail(QString::fromStdString(w.message));
+    }
+    const QString temp = target + QStringLiteral(".part");
+    QString why;
+    bool ok = false;
+    if (format == QLatin1String("pdf")) {
+        ok = writePdfSheet(temp, brief, plan, v, options.sheet, &why);
+    } else {
+        const double ppu = std::clamp(1600.0 / std::max(plan.footprint.width, plan.footprint.depth), 20.0, 200.0);
+        ok = planImage(brief, plan.footprint, v, ppu).save(temp, "PNG");
+        if (!ok) why = target + QStringLiteral(": cannot write the image");
+    }
+    if (ok && std::rename(temp.toStdString().c_str(), target.toStdString().c_str()) != 0) {
+        ok = false;
+        why = target + QStringLiteral(": cannot replace the file");
+    }
+    if (!ok) {
+        QFile::remove(temp);
+        return fail(why);
+    }
+    return true;
+}
+
+} // namespace abut::render

@@ -1,0 +1,112 @@
+// Steering the plan computation (progress, streaming, cancel) and the sizing
+// calls a wall drag uses (state of a layout, segment range, evaluate).
+#include "io/project_io.h"
+#include "plan/plan_builder.h"
+
+#include <QtTest>
+
+using namespace abut;
+
+namespace {
+Brief sample(const char* name) {
+    const LoadResult r = loadProject(std::string(ABUT_SAMPLES "/") + name + ".abut.json");
+    return r.brief;
+}
+} // namespace
+
+class TestPlanBuilder : public QObject {
+    Q_OBJECT
+private slots:
+    void progressRisesAndVariantsStream() {
+        const Brief b = sample("clinic");
+        std::vector<double> seen;
+        int found = 0;
+        PlanMonitor m;
+        m.progress = [&](double done, const std::string&) {
+            seen.push_back(done);
+            return true;
+        };
+        m.found = [&](const PlanVariant& v) {
+            ++found;
+            QVERIFY(v.sized);
+        };
+        const Plan plan = buildPlan(b, {}, &m);
+        QVERIFY(plan.status == PlanStatus::Ok || plan.status == PlanStatus::Compromised);
+        QVERIFY(found >= 1);
+        QVERIFY(seen.size() > 3);
+        for (std::size_t i = 1; i < seen.size(); ++i) QVERIFY(seen[i] >= seen[i - 1] - 1e-12);
+        QCOMPARE(seen.back(), 1.0);
+    }
+
+    void cancelStopsAndKeepsWhatWasFound_data() {
+        QTest::addColumn<int>("stopAfter"); // progress calls allowed before stopping
+        QTest::newRow("at once") << 0;
+        QTest::newRow("after a few") << 3;
+        QTest::newRow("while sizing") << 12;
+    }
+    void cancelStopsAndKeepsWhatWasFound() {
+        QFETCH(int, stopAfter);
+        const Brief b = sample("office-floor");
+        int calls = 0;
+        PlanMonitor m;
+        m.progress = [&](double, const std::string&) { return calls++ < stopAfter; };
+        const Plan plan = buildPlan(b, {}, &m);
+        QCOMPARE(plan.status, PlanStatus::Cancelled);
+        QCOMPARE(calls, stopAfter + 1); // nothing more is asked once stopped
+        for (const PlanVariant& v : plan.variants) QVERIFY(checkVariant(b, plan.footprint, v).empty());
+        if (stopAfter == 0) QVERIFY(plan.variants.empty());
+    }
+
+    // Moving one wall within its range changes only the rooms beside it and
+    // keeps every hard requirement.
+    void wallDragWithinRange() {
+        const Brief b = sample("family-house");
+        const Plan plan = buildPlan(b);
+        QVERIFY(!plan.variants.empty());
+        const PlanVariant& v = plan.variants[0];
+        SizingOptions o;
+        o.doorWidth = b.doorWidth;
+        o.anyWall = PlanOptions{}.anyWall;
+        const SizingProblem problem(b, v.extended, v.labeling, plan.footprint, o);
+        std::vector<Rect> rects(v.extended.graph.vertexCount());
+        int spare = 0;
+        for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
+            if (v.extended.isRoom(u)) rects[u] = v.rooms[u];
+            else if (v.extended.isSpare(u)) rects[u] = v.spaces[spare++];
+        }
+        const SizingResult state = problem.stateOf(rects);
+        for (std::size_t i = 0; i < b.rooms.size(); ++i) QCOMPARE(state.rooms[i].area, v.rooms[i].area());
+        const SegmentStructure& s = problem.segments();
+        int moved = 0;
+        for (int k = 0; k < s.verticalCount; ++k) {
+            if (k == s.westSegment || k == s.eastSegment) continue;
+            const auto [lo, hi] = problem.segmentRange(state, true, k);
+            QVERIFY2(lo <= state.x[k] + 1e-9 && state.x[k] <= hi + 1e-9, "the current position is in range");
+            for (double to : {lo, hi, 0.5 * (lo + hi)}) {
+                std::vector<double> x = state.x;
+                x[k] = to;
+                const SizingResult r = problem.evaluate(x, state.y);
+                for (const UnmetRequirement& u : r.unmet)
+                    QVERIFY2(u.kind == "area" || u.kind == "maxAspect",
+                             qPrintable(QString::fromStdString(u.kind + ": " + u.message)));
+                for (std::size_t i = 0; i < b.rooms.size(); ++i) {
+                    const bool beside = s.west[i] == k || s.east[i] == k;
+                    if (!beside) QCOMPARE(r.rooms[i].area, state.rooms[i].area);
+                }
+                PlanVariant dragged = v;
+                spare = 0;
+                dragged.spaces.clear();
+                for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
+                    if (v.extended.isRoom(u)) dragged.rooms[u] = r.rects[u];
+                    else if (v.extended.isSpare(u)) dragged.spaces.push_back(r.rects[u]);
+                }
+                QVERIFY2(checkVariant(b, plan.footprint, dragged).empty(), checkVariant(b, plan.footprint, dragged).c_str());
+            }
+            ++moved;
+        }
+        QVERIFY(moved > 0);
+    }
+};
+
+QTEST_GUILESS_MAIN(TestPlanBuilder)
+#include "tst_plan_builder.moc"
