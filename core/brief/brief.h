@@ -74,6 +74,8 @@ struct Brief {
     std::vector<Room> rooms;
     std::vector<Adjacency> adjacencies;
     std::vector<std::pair<std::string, SketchPoint>> sketch; // in file order
+    // The planner's choices among plan variants, by variantKey (plan/variant_key.h).
+    std::vector<std::string> pinnedVariants, hiddenVariants;
     OrderedJson unknownFields = OrderedJson::object();
 
     // Index of the room with this id, or -1.

@@ -226,6 +226,24 @@ EditResult setBriefField(Brief& brief, BriefField field, const std::string& text
     return EditResult::refused("Unknown field.");
 }
 
+namespace {
+void setListed(std::vector<std::string>& list, const std::string& key, bool listed) {
+    const auto it = std::find(list.begin(), list.end(), key);
+    if (listed && it == list.end()) list.push_back(key);
+    if (!listed && it != list.end()) list.erase(it);
+}
+} // namespace
+
+void setVariantPinned(Brief& brief, const std::string& key, bool pinned) {
+    setListed(brief.pinnedVariants, key, pinned);
+    if (pinned) setListed(brief.hiddenVariants, key, false);
+}
+
+void setVariantHidden(Brief& brief, const std::string& key, bool hidden) {
+    setListed(brief.hiddenVariants, key, hidden);
+    if (hidden) setListed(brief.pinnedVariants, key, false);
+}
+
 void placeUnsketchedRooms(Brief& brief) {
     double bottom = 0, left = 0;
     bool any = false;

@@ -71,6 +71,10 @@ std::optional<double> parsePlannerNumber(const std::string& text);
 std::optional<FacadeWish> parseFacade(const std::string& text);
 std::string facadeText(const FacadeWish& wish);
 
+// Pins or unpins, hides or shows a plan variant by its key (plan/variant_key.h).
+void setVariantPinned(Brief& brief, const std::string& key, bool pinned);
+void setVariantHidden(Brief& brief, const std::string& key, bool hidden);
+
 // Gives every room without a sketch position one, on rows below the rooms
 // that have one, spaced for their size (sketch units: 10 per metre of
 // radius, as the editor draws them). O(rooms).

@@ -261,8 +261,31 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
             }
         }
     }
+    if (doc.contains("variants")) {
+        const OrderedJson& v = doc.at("variants");
+        if (!v.is_object()) {
+            r.error("/variants", "variants must be an object with \"pinned\" and \"hidden\" lists of variant keys");
+        } else {
+            for (const char* key : {"pinned", "hidden"}) {
+                if (!v.contains(key)) continue;
+                const OrderedJson& list = v.at(key);
+                const std::string ptr = std::string("/variants/") + key;
+                std::vector<std::string>& out = std::string(key) == "pinned" ? brief.pinnedVariants : brief.hiddenVariants;
+                if (!list.is_array()) {
+                    r.error(ptr, std::string(key) + " must be a list of variant keys");
+                    continue;
+                }
+                for (std::size_t i = 0; i < list.size(); ++i) {
+                    if (!list[i].is_string() || list[i].get<std::string>().empty())
+                        r.error(ptr + "/" + std::to_string(i), "a variant key must be a non-empty string");
+                    else
+                        out.push_back(list[i].get<std::string>());
+                }
+            }
+        }
+    }
     brief.unknownFields = unknownOf(doc, {"format", "version", "units", "footprint", "doorWidth",
-                                          "rooms", "adjacencies", "sketch"});
+                                          "rooms", "adjacencies", "sketch", "variants"});
 }
 
 } // namespace
@@ -382,6 +405,12 @@ std::string serializeProject(const Brief& brief) {
         OrderedJson sk = OrderedJson::object();
         for (const auto& [id, p] : brief.sketch) sk[id] = {p.x, p.y};
         doc["sketch"] = sk;
+    }
+    if (!brief.pinnedVariants.empty() || !brief.hiddenVariants.empty()) {
+        OrderedJson v = OrderedJson::object();
+        if (!brief.pinnedVariants.empty()) v["pinned"] = brief.pinnedVariants;
+        if (!brief.hiddenVariants.empty()) v["hidden"] = brief.hiddenVariants;
+        doc["variants"] = v;
     }
     for (auto it = brief.unknownFields.begin(); it != brief.unknownFields.end(); ++it)
         doc[it.key()] = it.value();
