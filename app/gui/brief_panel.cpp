@@ -95,6 +95,10 @@ BriefPanel::BriefPanel(Document* doc, QWidget* parent) : QWidget(parent), doc_(d
     layout->addWidget(tabs_, 1);
 
     connect(rooms_, &QTableWidget::itemChanged, this, &BriefPanel::roomEdited);
+    rooms_->setMouseTracking(true);
+    connect(rooms_, &QTableWidget::cellEntered, this, [this](int row, int) {
+        if (QTableWidgetItem* item = rooms_->item(row, Name)) emit roomHovered(item->data(Qt::UserRole).toString());
+    });
     connect(width_, &QLineEdit::editingFinished, this, [this] { briefFieldEdited(int(BriefField::FootprintWidth), width_); });
     connect(depth_, &QLineEdit::editingFinished, this, [this] { briefFieldEdited(int(BriefField::FootprintDepth), depth_); });
     connect(door_, &QLineEdit::editingFinished, this, [this] { briefFieldEdited(int(BriefField::DoorWidth), door_); });
@@ -271,6 +275,25 @@ void BriefPanel::editRoomName(const QString& id) {
             rooms_->editItem(rooms_->item(i, Name));
             return;
         }
+}
+
+void BriefPanel::setHoverRoom(const QString& id) {
+    if (hoverRoom_ == id) return;
+    hoverRoom_ = id;
+    const bool was = filling_;
+    filling_ = true; // fonts are not edits
+    for (int i = 0; i < rooms_->rowCount(); ++i) {
+        const bool on = rooms_->item(i, Name)->data(Qt::UserRole).toString() == id;
+        for (int c = 0; c < ColumnCount; ++c) {
+            QTableWidgetItem* item = rooms_->item(i, c);
+            QFont f = item->font();
+            if (f.bold() != on) {
+                f.setBold(on);
+                item->setFont(f);
+            }
+        }
+    }
+    filling_ = was;
 }
 
 void BriefPanel::emitSelection() {

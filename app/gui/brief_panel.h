@@ -32,12 +32,15 @@ public:
     // Programmatic selection (from the sketch); no signal back.
     void selectItems(const QStringList& rooms, const QList<int>& adjacencies);
     void editRoomName(const QString& id);
+    // A room pointed at elsewhere (plan, sketch): its row drawn bold.
+    void setHoverRoom(const QString& id);
 
     enum RoomColumn { Name, Category, Area, MinWidth, MaxAspect, Facade, ColumnCount };
 
 signals:
     void selectionChangedByUser(const QStringList& rooms, const QList<int>& adjacencies);
     void message(const QString& text);
+    void roomHovered(const QString& id);
 
 private:
     void refill();
@@ -56,6 +59,7 @@ private:
     QComboBox* units_ = nullptr;
     QLabel* totals_ = nullptr;
     bool filling_ = false;
+    QString hoverRoom_;
 };
 
 } // namespace abut::gui

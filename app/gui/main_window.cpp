@@ -8,7 +8,12 @@
 #include "io/csv_import.h"
 #include "io/project_io.h"
 #include "plan/plan_builder.h"
+#include "plan/variant_key.h"
+#include "plan_runner.h"
 #include "plan_view.h"
+#include "schedule_panel.h"
+#include "export_plan.h"
+#include "variants_strip.h"
 #include "recovery.h"
 #include "sketch_view.h"
 
@@ -28,6 +33,8 @@
 #include <QStatusBar>
 #include <QStyle>
 #include <QToolBar>
+#include <QPrintDialog>
+#include <QPrinter>
 
 // Resources of a static library must be registered by name, outside any namespace.
 static void initAbutResources() { Q_INIT_RESOURCE(abut); }
@@ -60,11 +67,19 @@ MainWindow::MainWindow(const MainWindowOptions& options, QWidget* parent)
     sketch_->setObjectName(QStringLiteral("sketch"));
     sketch_->setDocument(doc_);
     planView_ = new PlanView(this);
+    planView_->setObjectName(QStringLiteral("planView"));
     planView_->showMessage(tr("Add rooms and adjacencies, or open a brief, to see plans."));
+    strip_ = new VariantsStrip(this);
+    runner_ = new PlanRunner(this);
 
+    auto* planSide = new QSplitter(Qt::Vertical, this);
+    planSide->addWidget(planView_);
+    planSide->addWidget(strip_);
+    planSide->setStretchFactor(0, 1);
+    planSide->setStretchFactor(1, 0);
     auto* split = new QSplitter(Qt::Horizontal, this);
     split->addWidget(sketch_);
-    split->addWidget(planView_);
+    split->addWidget(planSide);
     split->setStretchFactor(0, 1);
     split->setStretchFactor(1, 1);
     split->setSizes({640, 640});
@@ -84,6 +99,13 @@ MainWindow::MainWindow(const MainWindowOptions& options, QWidget* parent)
     diagDock->setObjectName(QStringLiteral("diagnosticsDock"));
     diagDock->setWidget(diagnostics_);
     addDockWidget(Qt::BottomDockWidgetArea, diagDock);
+    schedule_ = new SchedulePanel(this);
+    auto* scheduleDock = new QDockWidget(tr("Area schedule"), this);
+    scheduleDock->setObjectName(QStringLiteral("scheduleDock"));
+    scheduleDock->setWidget(schedule_);
+    addDockWidget(Qt::BottomDockWidgetArea, scheduleDock);
+    tabifyDockWidget(diagDock, scheduleDock);
+    diagDock->raise();
     resizeDocks({briefDock, diagDock}, {760, 440}, Qt::Horizontal);
     resizeDocks({briefDock}, {290}, Qt::Vertical);
 
@@ -107,7 +129,43 @@ MainWindow::MainWindow(const MainWindowOptions& options, QWidget* parent)
     planTimer_.setSingleShot(true);
     planTimer_.setInterval(options_.planDelayMs);
     connect(&planTimer_, &QTimer::timeout, this, &MainWindow::startPlanning);
-    connect(&planner_, &QFutureWatcher<Plan>::finished, this, &MainWindow::planReady);
+    connect(runner_, &PlanRunner::variantFound, this, &MainWindow::variantFound);
+    connect(runner_, &PlanRunner::finished, this, &MainWindow::planFinished);
+    connect(runner_, &PlanRunner::progress, this, [this](int permille, const QString& step) {
+        strip_->setProgress(permille, step, true);
+        statusBar()->showMessage(tr("Computing variants… %1 % (%2)").arg(permille / 10).arg(step));
+    });
+    connect(runner_, &PlanRunner::stopped, this, [this] {
+        strip_->setProgress(0, QString(), false);
+        status(tr("Stopped: %n variant(s) found so far.", nullptr, int(variants_.size())));
+    });
+    connect(strip_, &VariantsStrip::cancelRequested, this, [this] {
+        planTimer_.stop();
+        runner_->cancel();
+    });
+    connect(strip_, &VariantsStrip::variantChosen, this, [this](const QString& key) {
+        chooseVariant(key);
+        chosenByPlanner_ = true;
+    });
+    connect(strip_, &VariantsStrip::pinRequested, this, [this](const QString& key, bool pin) {
+        Brief b = doc_->brief();
+        setVariantPinned(b, key.toStdString(), pin);
+        doc_->edit(pin ? tr("Pin variant") : tr("Unpin variant"), b);
+    });
+    connect(strip_, &VariantsStrip::hideRequested, this, [this](const QString& key, bool hide) {
+        Brief b = doc_->brief();
+        setVariantHidden(b, key.toStdString(), hide);
+        doc_->edit(hide ? tr("Hide variant") : tr("Show variant"), b);
+    });
+    connect(planView_, &PlanView::wallMoved, this, &MainWindow::wallMoved);
+    connect(planView_, &PlanView::targetDragged, this, &MainWindow::targetDragged);
+    connect(planView_, &PlanView::lockToggled, this, [this](int room) {
+        if (!locked_.erase(room)) locked_.insert(room);
+        planView_->setLockedRooms(locked_);
+    });
+    connect(planView_, &PlanView::roomHovered, this, &MainWindow::hoverRoom);
+    connect(sketch_, &SketchView::roomHovered, this, &MainWindow::hoverRoom);
+    connect(panel_, &BriefPanel::roomHovered, this, &MainWindow::hoverRoom);
     if (options_.autosaveSeconds > 0) {
         autosaveTimer_.setInterval(options_.autosaveSeconds * 1000);
         connect(&autosaveTimer_, &QTimer::timeout, this, &MainWindow::autosaveNow);
@@ -124,7 +182,6 @@ MainWindow::~MainWindow() {
     // Background work holds copies of the brief only; wait so nothing
     // reports to a window that is gone.
     checker_.waitForFinished();
-    planner_.waitForFinished();
 }
 
 const Brief& MainWindow::brief() const { return doc_->brief(); }
@@ -156,6 +213,13 @@ void MainWindow::buildActions() {
                             tr("Add rooms from a room list, or adjacencies from a matrix, kept in a spreadsheet"),
                             [this] { importDialog(); });
     importA->setShortcut(QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_I));
+    QAction* exportA = make(tr("&Export Plan…"), "exportAction",
+                            tr("Write the plan on show as PDF sheet, DXF, SVG, PNG or area schedule CSV"),
+                            [this] { exportDialog(); });
+    exportA->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_E));
+    QAction* printA = make(tr("&Print Sheet…"), "printAction", tr("Print the plan on show as a sheet with its area schedule"),
+                           [this] { printSheet(); });
+    printA->setShortcut(QKeySequence::Print);
     QAction* quitA = make(tr("&Quit"), "quitAction", tr("Close Abut"), [this] { close(); });
     quitA->setShortcut(QKeySequence::Quit);
     file->addActions({newA, openA});
@@ -164,6 +228,7 @@ void MainWindow::buildActions() {
     file->addActions({saveA, saveAsA});
     file->addSeparator();
     file->addAction(importA);
+    file->addActions({exportA, printA});
     file->addSeparator();
     file->addAction(quitA);
 
@@ -225,6 +290,21 @@ void MainWindow::buildActions() {
     QAction* zoomOutA = make(tr("Zoom &Out"), "zoomOutAction", tr("Zoom out of the sketch"), [this] { sketch_->zoomBy(0.8); });
     zoomOutA->setShortcut(QKeySequence::ZoomOut);
     view->addActions({tidyA, fitA, zoomInA, zoomOutA});
+    view->addSeparator();
+    QAction* dimsA = make(tr("Show &Dimensions"), "dimensionsAction", tr("Write each room's width and depth on the plan"),
+                          [this](bool on) { planView_->setShowDimensions(on); });
+    dimsA->setCheckable(true);
+    dimsA->setShortcut(QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_D));
+    view->addAction(dimsA);
+    QMenu* grid = view->addMenu(tr("Planning &Grid"));
+    auto* gridGroup = new QActionGroup(this);
+    for (double g : {0.0, 0.3, 0.6, 1.2}) {
+        QAction* a = grid->addAction(g == 0 ? tr("None") : tr("%1 (walls snap while dragged)").arg(g));
+        a->setCheckable(true);
+        a->setChecked(g == 0);
+        gridGroup->addAction(a);
+        connect(a, &QAction::triggered, this, [this, g] { planView_->setGrid(g); });
+    }
 
     QMenu* help = menuBar()->addMenu(tr("&Help"));
     help->addAction(tr("&About Abut"), this, &MainWindow::showAbout);
@@ -418,10 +498,82 @@ bool MainWindow::offerRecovery() {
     return false;
 }
 
+namespace {
+
+// The same rooms, adjacencies, facade wishes and units: the current variant
+// still fits and only needs re-sizing.
+bool sameStructure(const Brief& a, const Brief& b) {
+    if (a.units != b.units || a.rooms.size() != b.rooms.size() || a.adjacencies.size() != b.adjacencies.size())
+        return false;
+    for (std::size_t i = 0; i < a.rooms.size(); ++i)
+        if (a.rooms[i].id != b.rooms[i].id || !(a.rooms[i].facade == b.rooms[i].facade)) return false;
+    for (std::size_t i = 0; i < a.adjacencies.size(); ++i) {
+        const Adjacency &x = a.adjacencies[i], &y = b.adjacencies[i];
+        if (x.a != y.a || x.b != y.b || x.kind != y.kind || x.priority != y.priority) return false;
+    }
+    return true;
+}
+
+// Only the planner's choices among variants differ: no need to plan again.
+bool onlyChoicesDiffer(const Brief& a, const Brief& b) {
+    Brief x = a, y = b;
+    x.pinnedVariants.clear();
+    x.hiddenVariants.clear();
+    y.pinnedVariants.clear();
+    y.hiddenVariants.clear();
+    return serializeProject(x) == serializeProject(y);
+}
+
+double twoDecimals(double v) { return std::round(v * 100.0) / 100.0; }
+
+} // namespace
+
 void MainWindow::briefChanged() {
     checkTimer_.start();
+    const Brief& b = doc_->brief();
+    const bool choicesOnly = haveCurrent_ && onlyChoicesDiffer(planBrief_, b);
+    if (haveCurrent_ && !currentStale_ && sameStructure(planBrief_, b)) resizeCurrent();
+    else if (haveCurrent_) currentStale_ = true;
+    keepLayoutOnce_ = false;
+    if (choicesOnly) {
+        planBrief_ = b;
+        strip_->setVariants(b, planFootprint_, variants_);
+        strip_->selectKey(QString::fromStdString(variantKey(planBrief_, current_)));
+        return;
+    }
+    if (b.rooms.empty()) {
+        planTimer_.stop();
+        runner_->cancel();
+        haveCurrent_ = false;
+        variants_.clear();
+        strip_->setVariants(b, b.effectiveFootprint(), variants_);
+        schedule_->clear();
+        planView_->showMessage(tr("Add rooms and adjacencies to see plans."));
+        return;
+    }
     planTimer_.start();
-    planPending_ = true;
+}
+
+bool MainWindow::planning() const { return runner_->busy() || planTimer_.isActive(); }
+
+void MainWindow::resizeCurrent() {
+    const Brief& b = doc_->brief();
+    const Footprint fp = b.effectiveFootprint();
+    SizingOptions o;
+    o.doorWidth = b.doorWidth;
+    o.anyWall = PlanOptions{}.anyWall;
+    o.spareMinimum = PlanOptions{}.spareMinimum;
+    o.lockedRooms.assign(locked_.begin(), locked_.end());
+    const SizingProblem problem(b, current_.extended, current_.labeling, fp, o);
+    const SizingResult start = problem.stateOf(vertexRects(current_));
+    SizingResult r;
+    if (keepLayoutOnce_) r = start; // a drag already placed every wall
+    else if (fp == planFootprint_) r = problem.solve(&start);
+    else r = problem.solve();
+    current_ = applySizing(b, fp, current_, r);
+    planBrief_ = b;
+    planFootprint_ = fp;
+    showCurrent();
 }
 
 void MainWindow::startCheck() {
@@ -474,29 +626,157 @@ void MainWindow::syncSelection(const QStringList& rooms, const QList<int>& adjac
 }
 
 void MainWindow::startPlanning() {
-    if (planner_.isRunning()) return; // planReady() starts the next one
-    if (doc_->brief().rooms.empty()) {
-        planPending_ = false;
-        planView_->showMessage(tr("Add rooms and adjacencies to see plans."));
-        return;
-    }
-    planPending_ = false;
-    status(tr("Computing plans…"));
-    const Brief brief = doc_->brief();
-    plannedRevision_ = doc_->revision();
-    planner_.setFuture(QtConcurrent::run([brief] { return buildPlan(brief); }));
+    if (doc_->brief().rooms.empty()) return;
+    variants_.clear();
+    strip_->setProgress(0, tr("starting"), true);
+    if (!haveCurrent_) planView_->showMessage(tr("Computing plans…"));
+    // A newer brief cancels the computation under way (PlanRunner).
+    runner_->start(doc_->brief(), doc_->revision());
 }
 
-void MainWindow::planReady() {
-    if (plannedRevision_ != doc_->revision() || planPending_) {
-        // The brief changed meanwhile: this plan is stale.
-        if (!planTimer_.isActive()) startPlanning();
+void MainWindow::variantFound(const PlanVariant& v, quint64 revision) {
+    if (revision != doc_->revision()) return;
+    variants_.push_back(v);
+    std::stable_sort(variants_.begin(), variants_.end(),
+                     [](const PlanVariant& a, const PlanVariant& b) { return a.score < b.score; });
+    for (std::size_t i = 0; i < variants_.size(); ++i) variants_[i].rank = int(i) + 1;
+    const Brief& b = doc_->brief();
+    strip_->setVariants(b, b.effectiveFootprint(), variants_);
+    if (!haveCurrent_ || currentStale_) chooseVariant(QString::fromStdString(variantKey(b, variants_.front())));
+    else strip_->selectKey(QString::fromStdString(variantKey(planBrief_, current_)));
+}
+
+void MainWindow::planFinished(const Plan& plan, quint64 revision) {
+    if (revision != doc_->revision()) return;
+    strip_->setProgress(1000, QString(), false);
+    variants_ = plan.variants;
+    const Brief& b = doc_->brief();
+    strip_->setVariants(b, plan.footprint, variants_);
+    status(QString::fromStdString(plan.summary));
+    if (variants_.empty()) {
+        haveCurrent_ = false;
+        schedule_->clear();
+        planView_->showMessage(QString::fromStdString(plan.summary));
         return;
     }
-    plan_ = planner_.result();
-    if (plan_.variants.empty()) planView_->showMessage(QString::fromStdString(plan_.summary));
-    else planView_->showPlan(doc_->brief(), plan_, 0);
-    status(QString::fromStdString(plan_.summary));
+    const QString currentKey = haveCurrent_ ? QString::fromStdString(variantKey(planBrief_, current_)) : QString();
+    if (!haveCurrent_ || currentStale_ || !chosenByPlanner_) {
+        // The best variant the planner has not set aside; pinned ones first.
+        const QStringList shown = strip_->shownKeys();
+        chooseVariant(shown.isEmpty() ? QString::fromStdString(variantKey(b, variants_.front())) : shown.front());
+    } else {
+        strip_->selectKey(currentKey);
+    }
+}
+
+void MainWindow::chooseVariant(const QString& key) {
+    const Brief& b = doc_->brief();
+    for (const PlanVariant& v : variants_) {
+        if (QString::fromStdString(variantKey(b, v)) != key) continue;
+        current_ = v;
+        haveCurrent_ = true;
+        currentStale_ = false;
+        chosenByPlanner_ = false;
+        planBrief_ = b;
+        planFootprint_ = b.effectiveFootprint();
+        locked_.clear();
+        planView_->setLockedRooms(locked_);
+        showCurrent();
+        return;
+    }
+}
+
+void MainWindow::showCurrent() {
+    planView_->setVariant(planBrief_, planFootprint_, current_);
+    schedule_->setVariant(planBrief_, planFootprint_, current_);
+    strip_->selectKey(QString::fromStdString(variantKey(planBrief_, current_)));
+}
+
+void MainWindow::wallMoved(const PlanVariant& resized, const QString& description) {
+    // The rooms beside the wall take their new areas as targets: the brief
+    // says what the plan now shows, and one undo puts both back.
+    Brief b = doc_->brief();
+    for (std::size_t i = 0; i < b.rooms.size() && i < resized.rooms.size(); ++i)
+        if (std::abs(resized.rooms[i].area() - current_.rooms[i].area()) > 1e-9)
+            b.rooms[i].area = twoDecimals(resized.rooms[i].area());
+    current_ = resized;
+    chosenByPlanner_ = true; // a hand-sized plan stays on show when new variants arrive
+    keepLayoutOnce_ = true;
+    doc_->edit(description, b);
+    if (keepLayoutOnce_) { // nothing in the brief changed (a spare space moved)
+        keepLayoutOnce_ = false;
+        showCurrent();
+    }
+}
+
+void MainWindow::targetDragged(int room, double area, const PlanVariant& resized) {
+    Brief b = doc_->brief();
+    if (room < 0 || room >= int(b.rooms.size())) return;
+    b.rooms[room].area = twoDecimals(area);
+    current_ = resized;
+    chosenByPlanner_ = true;
+    keepLayoutOnce_ = true;
+    doc_->edit(tr("Change target area of %1").arg(QString::fromStdString(b.rooms[room].displayName())), b);
+    keepLayoutOnce_ = false;
+}
+
+void MainWindow::hoverRoom(const QString& id) {
+    sketch_->setHoverRoom(id);
+    panel_->setHoverRoom(id);
+    planView_->setHighlightedRoom(id);
+}
+
+bool MainWindow::exportCurrent(const QString& path, QString* error) {
+    if (!haveCurrent_) {
+        if (error) *error = tr("There is no plan to export yet.");
+        return false;
+    }
+    Plan plan;
+    plan.units = planBrief_.units;
+    plan.footprint = planFootprint_;
+    plan.variants = {current_};
+    render::ExportOptions o;
+    o.sheet.project = doc_->path().isEmpty() ? tr("Untitled") : QFileInfo(doc_->path()).completeBaseName().section(QLatin1Char('.'), 0, 0);
+    o.sheet.variantRank = current_.rank;
+    return render::exportVariant(path, planBrief_, plan, current_, o, error);
+}
+
+void MainWindow::exportDialog() {
+    if (!haveCurrent_) {
+        status(tr("There is no plan to export yet."));
+        return;
+    }
+    const QString base = doc_->path().isEmpty() ? QStringLiteral("plan") : QFileInfo(doc_->path()).path() + QLatin1Char('/') +
+                                                     QFileInfo(doc_->path()).completeBaseName().section(QLatin1Char('.'), 0, 0);
+    const QString p = QFileDialog::getSaveFileName(
+        this, tr("Export plan"), base + QStringLiteral(".pdf"),
+        tr("PDF sheet (*.pdf);;DXF for CAD (*.dxf);;SVG drawing (*.svg);;PNG image (*.png);;Area schedule CSV (*.csv)"));
+    if (p.isEmpty()) return;
+    QString error;
+    if (exportCurrent(p, &error)) status(tr("Exported %1").arg(QFileInfo(p).fileName()));
+    else QMessageBox::warning(this, tr("Cannot export"), error);
+}
+
+void MainWindow::printSheet() {
+    if (!haveCurrent_) {
+        status(tr("There is no plan to print yet."));
+        return;
+    }
+    QPrinter printer(QPrinter::HighResolution);
+    printer.setPageSize(QPageSize(QPageSize::A3));
+    printer.setPageOrientation(QPageLayout::Landscape);
+    printer.setPageMargins(QMarginsF(0, 0, 0, 0), QPageLayout::Millimeter);
+    QPrintDialog dialog(&printer, this);
+    if (dialog.exec() != QDialog::Accepted) return;
+    Plan plan;
+    plan.units = planBrief_.units;
+    plan.footprint = planFootprint_;
+    plan.variants = {current_};
+    render::SheetOptions o;
+    o.project = displayName(doc_->path());
+    o.variantRank = current_.rank;
+    if (!render::paintSheet(printer, printer.resolution(), planBrief_, plan, current_, o))
+        QMessageBox::warning(this, tr("Cannot print"), tr("The printer could not be started."));
 }
 
 void MainWindow::addRoomAt(const QPointF& sketchPos) {

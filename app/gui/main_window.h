@@ -11,6 +11,7 @@
 
 #include <functional>
 #include <memory>
+#include <set>
 
 class QListWidget;
 class QListWidgetItem;
@@ -20,9 +21,12 @@ namespace abut::gui {
 
 class BriefPanel;
 class Document;
+class PlanRunner;
 class PlanView;
 class Recovery;
+class SchedulePanel;
 class SketchView;
+class VariantsStrip;
 
 struct MainWindowOptions {
     QString recoveryFolder;      // empty: Recovery::defaultFolder()
@@ -49,9 +53,18 @@ public:
     SketchView* sketchView() const { return sketch_; }
     BriefPanel* briefPanel() const { return panel_; }
     QListWidget* diagnosticsList() const { return diagnostics_; }
+    PlanView* planView() const { return planView_; }
+    VariantsStrip* variantsStrip() const { return strip_; }
+    SchedulePanel* schedulePanel() const { return schedule_; }
+    PlanRunner* planRunner() const { return runner_; }
+    // The variant on show, as sized for the current brief.
+    bool hasCurrentVariant() const { return haveCurrent_; }
+    const PlanVariant& currentVariant() const { return current_; }
+    const std::vector<PlanVariant>& variants() const { return variants_; }
+    bool exportCurrent(const QString& path, QString* error = nullptr);
     Recovery* recovery() const { return recovery_.get(); }
     // True while plans or the live check are being computed in the background.
-    bool planning() const { return planner_.isRunning() || planPending_; }
+    bool planning() const;
     bool checking() const { return checker_.isRunning() || checkTimer_.isActive(); }
     const LiveCheck& lastCheck() const { return check_; }
 
@@ -89,7 +102,16 @@ private:
     void startCheck();
     void checkReady();
     void startPlanning();
-    void planReady();
+    void variantFound(const PlanVariant& v, quint64 revision);
+    void planFinished(const Plan& plan, quint64 revision);
+    void chooseVariant(const QString& key);
+    void showCurrent();
+    void resizeCurrent();
+    void wallMoved(const PlanVariant& resized, const QString& description);
+    void targetDragged(int room, double area, const PlanVariant& resized);
+    void hoverRoom(const QString& id);
+    void exportDialog();
+    void printSheet();
     void diagnosticClicked(QListWidgetItem* item);
     void syncSelection(const QStringList& rooms, const QList<int>& adjacencies, QObject* from);
     void status(const QString& text);
@@ -105,11 +127,17 @@ private:
     quint64 autosavedRevision_ = 0;
     QTimer autosaveTimer_, checkTimer_, planTimer_;
     QFutureWatcher<LiveCheck> checker_;
-    QFutureWatcher<Plan> planner_;
-    bool planPending_ = false;
-    quint64 plannedRevision_ = 0;
+    PlanRunner* runner_ = nullptr;
+    VariantsStrip* strip_ = nullptr;
+    SchedulePanel* schedule_ = nullptr;
     LiveCheck check_;
-    Plan plan_;
+    std::vector<PlanVariant> variants_; // the strip's, best first (streamed until the plan is done)
+    PlanVariant current_;               // on show, sized for planBrief_
+    bool haveCurrent_ = false, currentStale_ = false, keepLayoutOnce_ = false;
+    bool chosenByPlanner_ = false; // picked in the strip, not just the best so far
+    Brief planBrief_;
+    Footprint planFootprint_;
+    std::set<int> locked_;
     bool syncing_ = false;
 };
 

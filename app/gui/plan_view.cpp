@@ -1,56 +1,430 @@
 #include "plan_view.h"
 
-#include "sheet.h"
+#include "palette.h"
+#include "plan/plan_builder.h"
 
+#include <QContextMenuEvent>
+#include <QMenu>
+#include <QMouseEvent>
 #include <QPainter>
 
+#include <algorithm>
+#include <cmath>
+
 namespace abut::gui {
+
+namespace {
+
+const QColor ink(0x22, 0x22, 0x22);
+const QColor highlightInk(0x1F, 0x5F, 0xBF);
+
+QString deviationText(double deviation) {
+    if (std::abs(deviation) < 0.005) return QObject::tr("on target");
+    // Arrow and sign both say which way: no colour needed.
+    return (deviation < 0 ? QStringLiteral("\u25BC ") : QStringLiteral("\u25B2 ")) +
+           QObject::tr("%1%2 %").arg(deviation < 0 ? QStringLiteral("\u2212") : QStringLiteral("+"))
+               .arg(std::abs(100.0 * deviation), 0, 'f', std::abs(deviation) < 0.1 ? 1 : 0);
+}
+
+// Largest pixel size ≤ `px` at which every line fits `width`.
+double fitFont(QFont& f, const QStringList& lines, double width, double px) {
+    while (px > 5) {
+        f.setPixelSize(int(px));
+        const QFontMetricsF fm(f);
+        bool fits = true;
+        for (const QString& l : lines) fits = fits && fm.horizontalAdvance(l) <= width;
+        if (fits) break;
+        px *= 0.9;
+    }
+    f.setPixelSize(std::max(5, int(px)));
+    return px;
+}
+
+} // namespace
 
 PlanView::PlanView(QWidget* parent) : QWidget(parent) {
     setMinimumSize(240, 180);
     setAutoFillBackground(true);
+    setMouseTracking(true);
     QPalette p = palette();
     p.setColor(QPalette::Window, QColor(0xF4, 0xF3, 0xEF));
     setPalette(p);
+    setToolTip(tr("Drag an inner wall to move it; Alt+drag up or down on a room to change its target area; "
+                  "right-click a room to lock its size."));
 }
 
-void PlanView::showPlan(const Brief& brief, const Plan& plan, int variant) {
+PlanView::~PlanView() = default;
+
+void PlanView::setVariant(const Brief& brief, const Footprint& footprint, const PlanVariant& variant) {
     brief_ = brief;
-    plan_ = plan;
-    variant_ = variant;
+    fp_ = footprint;
+    v_ = variant;
+    has_ = true;
     message_.clear();
+    drag_ = Drag::None;
+    rebuildProblem();
     update();
 }
 
 void PlanView::showMessage(const QString& text) {
     message_ = text;
-    variant_ = -1;
+    has_ = false;
+    problem_.reset();
+    drag_ = Drag::None;
     update();
+}
+
+void PlanView::setHighlightedRoom(const QString& id) {
+    if (highlighted_ == id) return;
+    highlighted_ = id;
+    update();
+}
+
+void PlanView::setShowDimensions(bool on) {
+    dimensions_ = on;
+    update();
+}
+
+void PlanView::setLockedRooms(const std::set<int>& rooms) {
+    locked_ = rooms;
+    rebuildProblem();
+    update();
+}
+
+void PlanView::rebuildProblem() {
+    problem_.reset();
+    if (!has_ || v_.extended.graph.vertexCount() == 0 || v_.rooms.size() != brief_.rooms.size()) return;
+    SizingOptions o;
+    o.doorWidth = brief_.doorWidth;
+    o.anyWall = PlanOptions{}.anyWall;
+    o.spareMinimum = PlanOptions{}.spareMinimum;
+    o.lockedRooms.assign(locked_.begin(), locked_.end());
+    problem_ = std::make_unique<SizingProblem>(brief_, v_.extended, v_.labeling, fp_, o);
+    state_ = problem_->stateOf(vertexRects(v_));
+}
+
+std::vector<PlanView::Handle> PlanView::handles() const {
+    std::vector<Handle> out;
+    if (!problem_) return out;
+    const SegmentStructure& s = problem_->segments();
+    const int n = v_.extended.graph.vertexCount();
+    for (int axis = 0; axis < 2; ++axis) {
+        const bool vertical = axis == 0;
+        const int count = vertical ? s.verticalCount : s.horizontalCount;
+        for (int k = 0; k < count; ++k) {
+            if (vertical ? (k == s.westSegment || k == s.eastSegment) : (k == s.southSegment || k == s.northSegment))
+                continue;
+            Handle h;
+            h.vertical = vertical;
+            h.segment = k;
+            h.position = vertical ? state_.x[k] : state_.y[k];
+            h.from = 1e300;
+            h.to = -1e300;
+            bool lockedSide = false;
+            for (int u = 0; u < n; ++u) {
+                if (v_.extended.isPole(u)) continue;
+                const bool beside = vertical ? (s.west[u] == k || s.east[u] == k) : (s.south[u] == k || s.north[u] == k);
+                if (!beside) continue;
+                const Rect& r = state_.rects[u];
+                h.from = std::min(h.from, vertical ? r.y0 : r.x0);
+                h.to = std::max(h.to, vertical ? r.y1 : r.x1);
+                lockedSide = lockedSide || (u < int(brief_.rooms.size()) && locked_.count(u));
+            }
+            if (lockedSide || h.from > h.to) continue;
+            std::tie(h.lo, h.hi) = problem_->segmentRange(state_, vertical, k);
+            if (!(h.hi > h.lo)) continue;
+            out.push_back(h);
+        }
+    }
+    return out;
+}
+
+QRectF PlanView::planRect() const {
+    const int dropped = has_ ? std::min<int>(int(v_.dropped.size()), 4) : 0;
+    const double listH = dropped > 0 ? fontMetrics().height() * (dropped + 1) + 8 : 0;
+    return QRectF(rect()).adjusted(24, 34, -24, -24 - listH);
+}
+
+double PlanView::pixelsPerUnit() const {
+    const QRectF a = planRect();
+    if (fp_.width <= 0 || fp_.depth <= 0) return 1;
+    return std::min(a.width() / fp_.width, a.height() / fp_.depth);
+}
+
+QPointF PlanView::toScreen(double x, double y) const {
+    const QRectF a = planRect();
+    const double s = pixelsPerUnit();
+    const QPointF origin(a.left() + (a.width() - fp_.width * s) / 2, a.top() + (a.height() - fp_.depth * s) / 2);
+    return {origin.x() + x * s, origin.y() + (fp_.depth - y) * s};
+}
+
+QRectF PlanView::toScreen(const Rect& r) const { return QRectF(toScreen(r.x0, r.y1), toScreen(r.x1, r.y0)); }
+
+QPointF PlanView::screenPointOn(const Handle& h) const {
+    const double mid = 0.5 * (h.from + h.to);
+    return h.vertical ? toScreen(h.position, mid) : toScreen(mid, h.position);
+}
+
+QString PlanView::roomAt(const QPointF& screen) const {
+    if (!has_) return {};
+    for (std::size_t i = 0; i < v_.rooms.size() && i < brief_.rooms.size(); ++i)
+        if (toScreen(v_.rooms[i]).contains(screen)) return QString::fromStdString(brief_.rooms[i].id);
+    return {};
+}
+
+std::optional<PlanView::Handle> PlanView::handleAt(const QPointF& screen) const {
+    const double s = pixelsPerUnit();
+    for (const Handle& h : handles()) {
+        const QPointF a = h.vertical ? toScreen(h.position, h.from) : toScreen(h.from, h.position);
+        const QPointF b = h.vertical ? toScreen(h.position, h.to) : toScreen(h.to, h.position);
+        const double across = h.vertical ? std::abs(screen.x() - a.x()) : std::abs(screen.y() - a.y());
+        const double along = h.vertical ? screen.y() : screen.x();
+        const double lo = std::min(h.vertical ? a.y() : a.x(), h.vertical ? b.y() : b.x());
+        const double hi = std::max(h.vertical ? a.y() : a.x(), h.vertical ? b.y() : b.x());
+        if (across <= std::max(4.0, 0.05 * s) && along >= lo && along <= hi) return h;
+    }
+    return std::nullopt;
+}
+
+void PlanView::mousePressEvent(QMouseEvent* event) {
+    if (!has_ || !problem_ || event->button() != Qt::LeftButton) return;
+    const QPointF at = event->position();
+    if (event->modifiers() & Qt::AltModifier) {
+        const QString id = roomAt(at);
+        if (id.isEmpty()) return;
+        dragRoom_ = brief_.roomIndex(id.toStdString());
+        drag_ = Drag::Target;
+        dragStartY_ = at.y();
+        dragStartArea_ = dragArea_ = brief_.rooms[dragRoom_].area;
+        beforeDrag_ = v_;
+        return;
+    }
+    if (const std::optional<Handle> h = handleAt(at)) {
+        drag_ = Drag::Wall;
+        dragHandle_ = *h;
+        beforeDrag_ = v_;
+    }
+}
+
+void PlanView::mouseMoveEvent(QMouseEvent* event) {
+    const QPointF at = event->position();
+    if (drag_ == Drag::Wall) {
+        const double s = pixelsPerUnit();
+        const QPointF origin = toScreen(0, 0);
+        double pos = dragHandle_.vertical ? (at.x() - origin.x()) / s : (origin.y() - at.y()) / s;
+        if (grid_ > 0) {
+            const double snapped = std::round(pos / grid_) * grid_;
+            if (snapped >= dragHandle_.lo && snapped <= dragHandle_.hi) pos = snapped;
+        }
+        pos = std::clamp(pos, dragHandle_.lo, dragHandle_.hi);
+        std::vector<double> x = state_.x, y = state_.y;
+        (dragHandle_.vertical ? x : y)[dragHandle_.segment] = pos;
+        const SizingResult r = problem_->evaluate(x, y);
+        v_ = applySizing(brief_, fp_, v_, r);
+        state_ = r;
+        dragHandle_.position = pos;
+        update();
+        return;
+    }
+    if (drag_ == Drag::Target) {
+        // 200 px up doubles the target; down halves it.
+        dragArea_ = std::max(0.1, dragStartArea_ * std::pow(2.0, (dragStartY_ - at.y()) / 200.0));
+        problem_->setTargetArea(dragRoom_, dragArea_);
+        const SizingResult r = problem_->solve(&state_);
+        Brief b = brief_;
+        b.rooms[dragRoom_].area = dragArea_;
+        v_ = applySizing(b, fp_, v_, r);
+        state_ = r;
+        update();
+        return;
+    }
+    const QString id = roomAt(at);
+    if (id != hovered_) {
+        hovered_ = id;
+        emit roomHovered(id);
+        update();
+    }
+    const std::optional<Handle> h = problem_ ? handleAt(at) : std::nullopt;
+    setCursor(h ? (h->vertical ? Qt::SplitHCursor : Qt::SplitVCursor) : Qt::ArrowCursor);
+}
+
+void PlanView::mouseReleaseEvent(QMouseEvent*) {
+    const Drag was = drag_;
+    drag_ = Drag::None;
+    if (was == Drag::Wall) {
+        bool moved = false;
+        for (std::size_t i = 0; i < v_.rooms.size(); ++i)
+            moved = moved || std::abs(v_.rooms[i].area() - beforeDrag_.rooms[i].area()) > 1e-12;
+        if (!moved) return;
+        QStringList beside;
+        const SegmentStructure& s = problem_->segments();
+        for (std::size_t i = 0; i < brief_.rooms.size(); ++i) {
+            const int k = dragHandle_.segment;
+            const bool on = dragHandle_.vertical ? (s.west[i] == k || s.east[i] == k) : (s.south[i] == k || s.north[i] == k);
+            if (on) beside << QString::fromStdString(brief_.rooms[i].displayName());
+        }
+        emit wallMoved(v_, tr("Move wall of %1").arg(beside.mid(0, 3).join(QStringLiteral(", "))));
+    } else if (was == Drag::Target) {
+        if (std::abs(dragArea_ - dragStartArea_) > 1e-9) emit targetDragged(dragRoom_, dragArea_, v_);
+    }
+}
+
+void PlanView::leaveEvent(QEvent*) {
+    if (!hovered_.isEmpty()) {
+        hovered_.clear();
+        emit roomHovered(QString());
+        update();
+    }
+}
+
+void PlanView::contextMenuEvent(QContextMenuEvent* event) {
+    const QString id = roomAt(event->pos());
+    if (id.isEmpty()) return;
+    const int room = brief_.roomIndex(id.toStdString());
+    QMenu menu(this);
+    const QString name = QString::fromStdString(brief_.rooms[room].displayName());
+    QAction* lock = menu.addAction(locked_.count(room) ? tr("Unlock size of %1").arg(name) : tr("Lock size of %1").arg(name));
+    if (menu.exec(event->globalPos()) == lock) emit lockToggled(room);
 }
 
 void PlanView::paintEvent(QPaintEvent*) {
     QPainter p(this);
-    if (variant_ < 0 || variant_ >= static_cast<int>(plan_.variants.size())) {
+    p.setRenderHint(QPainter::Antialiasing);
+    if (!has_) {
         p.setPen(QColor(0x55, 0x55, 0x55));
         p.drawText(rect().adjusted(20, 20, -20, -20), Qt::AlignCenter | Qt::TextWordWrap, message_);
         return;
     }
-    const PlanVariant& v = plan_.variants[variant_];
-    const QRectF area = QRectF(rect()).adjusted(24, 36, -24, -24);
-    render::paintPlan(p, area, brief_, plan_.footprint, v);
-    p.setPen(QColor(0x22, 0x22, 0x22));
-    QFont f = font();
-    f.setBold(true);
-    p.setFont(f);
     const QString u = QString::fromStdString(brief_.units);
+    const QString u2 = u + QChar(0x00B2);
+    QFont title = font();
+    title.setBold(true);
+    p.setFont(title);
+    p.setPen(ink);
     p.drawText(QRectF(24, 6, width() - 48, 24), Qt::AlignLeft | Qt::AlignVCenter,
-               tr("Variant %1 of %2 — %3 × %4 %5 — worst area deviation %6%")
-                   .arg(variant_ + 1)
-                   .arg(plan_.variants.size())
-                   .arg(plan_.footprint.width, 0, 'f', 2)
-                   .arg(plan_.footprint.depth, 0, 'f', 2)
+               tr("Variant %1 — %2 × %3 %4 — worst area deviation %5 %")
+                   .arg(v_.rank)
+                   .arg(fp_.width, 0, 'f', 2)
+                   .arg(fp_.depth, 0, 'f', 2)
                    .arg(u)
-                   .arg(100.0 * v.metrics.worstAreaError, 0, 'f', 1));
+                   .arg(100.0 * v_.metrics.worstAreaError, 0, 'f', 1));
+    const double s = pixelsPerUnit();
+
+    for (const Rect& r : v_.spaces) {
+        p.setPen(QPen(QColor(0x77, 0x77, 0x77), 1, Qt::DashLine));
+        p.setBrush(QBrush(QColor(0xAA, 0xAA, 0xAA), Qt::BDiagPattern));
+        const QRectF box = toScreen(r);
+        p.drawRect(box);
+        if (box.width() > 40 && box.height() > 14) {
+            p.setPen(QColor(0x55, 0x55, 0x55));
+            p.drawText(box, Qt::AlignCenter, tr("spare"));
+        }
+    }
+    for (std::size_t i = 0; i < v_.rooms.size() && i < brief_.rooms.size(); ++i) {
+        const Room& room = brief_.rooms[i];
+        const QRectF box = toScreen(v_.rooms[i]);
+        QColor fill = categoryColor(QString::fromStdString(room.category)).lighter(115);
+        p.setPen(QPen(ink, 1.2));
+        p.setBrush(fill);
+        p.drawRect(box);
+        const QString id = QString::fromStdString(room.id);
+        if (id == hovered_ || id == highlighted_) {
+            p.setPen(QPen(highlightInk, 3.5));
+            p.setBrush(Qt::NoBrush);
+            p.drawRect(box.adjusted(2, 2, -2, -2));
+        }
+        const double area = v_.rooms[i].area();
+        const double dev = (area - room.area) / room.area;
+        const QStringList lines{QString::fromStdString(room.displayName()),
+                                tr("%1 of %2 %3").arg(area, 0, 'f', 1).arg(room.area, 0, 'f', 1).arg(u2),
+                                deviationText(dev)};
+        QFont f = font();
+        const QRectF inner = box.adjusted(4, 3, -4, -3);
+        const double px = fitFont(f, lines, inner.width(), std::min(15.0, inner.height() / 3.6));
+        p.setFont(f);
+        p.setPen(ink);
+        const double lh = QFontMetricsF(f).height();
+        if (lh * 3 <= inner.height() + 1) {
+            const double top = inner.center().y() - 1.5 * lh;
+            for (int k = 0; k < 3; ++k)
+                p.drawText(QRectF(inner.left(), top + k * lh, inner.width(), lh), Qt::AlignCenter, lines[k]);
+        } else {
+            p.drawText(inner, Qt::AlignCenter, QFontMetricsF(f).elidedText(lines[0], Qt::ElideRight, inner.width()));
+        }
+        Q_UNUSED(px);
+        if (locked_.count(int(i))) {
+            QFont small = font();
+            small.setPixelSize(10);
+            p.setFont(small);
+            p.drawText(box.adjusted(3, 2, -3, -2), Qt::AlignTop | Qt::AlignLeft, tr("locked"));
+        }
+        if (dimensions_) {
+            QFont small = font();
+            small.setPixelSize(10);
+            p.setFont(small);
+            p.setPen(QColor(0x33, 0x33, 0x33));
+            p.drawText(box.adjusted(2, 2, -2, -2), Qt::AlignBottom | Qt::AlignHCenter,
+                       QString::number(v_.rooms[i].width(), 'f', 2));
+            p.save();
+            p.translate(box.left() + 2, box.center().y());
+            p.rotate(-90);
+            p.drawText(QRectF(-box.height() / 2, 0, box.height(), 12), Qt::AlignCenter,
+                       QString::number(v_.rooms[i].depth(), 'f', 2));
+            p.restore();
+        }
+    }
+    // The footprint outline.
+    p.setBrush(Qt::NoBrush);
+    p.setPen(QPen(QColor(0x1F, 0x3A, 0x93), 3));
+    p.drawRect(toScreen(Rect{0, 0, fp_.width, fp_.depth}));
+    // Dropped adjacencies: a dashed line between the rooms, × in the middle.
+    QStringList droppedText;
+    for (int a : v_.dropped) {
+        if (a < 0 || a >= int(brief_.adjacencies.size())) continue;
+        const Adjacency& adj = brief_.adjacencies[a];
+        const int i = brief_.roomIndex(adj.a), j = brief_.roomIndex(adj.b);
+        if (i < 0 || j < 0) continue;
+        const QPointF c1 = toScreen(v_.rooms[i]).center(), c2 = toScreen(v_.rooms[j]).center();
+        p.setPen(QPen(QColor(0x8B, 0x1A, 0x1A), 2, Qt::DashLine));
+        p.drawLine(c1, c2);
+        QFont bold = font();
+        bold.setBold(true);
+        bold.setPixelSize(16);
+        p.setFont(bold);
+        p.drawText(QRectF((c1 + c2) / 2 - QPointF(8, 9), QSizeF(16, 18)), Qt::AlignCenter, QStringLiteral("\u00D7"));
+        droppedText << tr("%1–%2 (%3, %4)")
+                           .arg(QString::fromStdString(brief_.rooms[i].displayName()),
+                                QString::fromStdString(brief_.rooms[j].displayName()),
+                                adj.kind == AdjacencyKind::Door ? tr("door") : tr("wall"),
+                                adj.priority == Priority::Must ? tr("must") : tr("should"));
+    }
+    if (!droppedText.isEmpty()) {
+        p.setFont(font());
+        p.setPen(ink);
+        const double lh = fontMetrics().height();
+        double y = planRect().bottom() + 8;
+        p.drawText(QRectF(24, y, width() - 48, lh), Qt::AlignLeft, tr("Not realised in this variant (× on the plan):"));
+        for (int k = 0; k < std::min<int>(4, droppedText.size()); ++k) {
+            y += lh;
+            const QString line = k == 3 && droppedText.size() > 4
+                                     ? tr("… and %1 more").arg(droppedText.size() - 3)
+                                     : droppedText[k];
+            p.drawText(QRectF(36, y, width() - 60, lh), Qt::AlignLeft, line);
+        }
+    }
+    // While a wall is dragged: the range it may move in.
+    if (drag_ == Drag::Wall) {
+        const Handle& h = dragHandle_;
+        const QRectF band = h.vertical ? QRectF(toScreen(h.lo, h.to), toScreen(h.hi, h.from))
+                                       : QRectF(toScreen(h.from, h.hi), toScreen(h.to, h.lo));
+        p.setPen(Qt::NoPen);
+        p.setBrush(QColor(0x1F, 0x5F, 0xBF, 40));
+        p.drawRect(band.normalized());
+        p.setPen(QPen(highlightInk, 3));
+        p.drawLine(h.vertical ? toScreen(h.position, h.from) : toScreen(h.from, h.position),
+                   h.vertical ? toScreen(h.position, h.to) : toScreen(h.to, h.position));
+    }
+    Q_UNUSED(s);
 }
 
 } // namespace abut::gui

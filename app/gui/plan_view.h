@@ -2,29 +2,97 @@
 
 #include "brief/brief.h"
 #include "plan/plan.h"
+#include "size/segment_sizing.h"
 
 #include <QWidget>
 
+#include <memory>
+#include <optional>
+#include <set>
+
 namespace abut::gui {
 
-// The selected variant drawn to scale, north up, with room names and
-// achieved areas. Read-only for now; walls become draggable with sizing in
-// the editor.
+// The selected variant to scale, north up: rooms with their names and
+// achieved area against the target ("12.4 of 14 m², −11 %" with an arrow
+// down or up, so the deviation reads without colour), spare spaces hatched,
+// dropped adjacencies drawn as dashed lines marked × and listed under the
+// plan, room dimensions on demand.
+//
+// Sizing by hand: drag an inner wall (a maximal segment) — it moves only
+// within the range the sizing core allows and only the rooms beside it
+// change; Alt+drag up or down on a room changes its target area, the plan
+// re-sized as the pointer moves. Each drag ends in one signal, which the
+// window turns into one undoable edit.
 class PlanView : public QWidget {
     Q_OBJECT
 public:
     explicit PlanView(QWidget* parent = nullptr);
-    void showPlan(const Brief& brief, const Plan& plan, int variant);
+    ~PlanView() override;
+
+    // Shows a variant of `brief` (its rectangles are taken as they are).
+    void setVariant(const Brief& brief, const Footprint& footprint, const PlanVariant& variant);
     void showMessage(const QString& text);
+    bool hasVariant() const { return has_; }
+    const PlanVariant& variant() const { return v_; }
+
+    void setHighlightedRoom(const QString& id);
+    void setShowDimensions(bool on);
+    void setLockedRooms(const std::set<int>& rooms);
+    // Planning module walls snap to while dragged (0 = none), plan units.
+    void setGrid(double module) { grid_ = module; }
+
+    // For tests and tooltips: inner segments that can be dragged, where a
+    // point on them is on screen, and the range the sizing core allows.
+    struct Handle {
+        bool vertical = true;
+        int segment = -1;
+        double position = 0; // plan units
+        double lo = 0, hi = 0;
+        double from = 0, to = 0; // its extent along the other axis
+    };
+    std::vector<Handle> handles() const;
+    QPointF screenPointOn(const Handle& h) const;
+    QPointF toScreen(double x, double y) const;
+    double pixelsPerUnit() const;
+    QString roomAt(const QPointF& screen) const;
+
+signals:
+    void roomHovered(const QString& id); // "" when none
+    void wallMoved(const abut::PlanVariant& resized, const QString& description);
+    void targetDragged(int room, double area, const abut::PlanVariant& resized);
+    void lockToggled(int room);
 
 protected:
     void paintEvent(QPaintEvent* event) override;
+    void mousePressEvent(QMouseEvent* event) override;
+    void mouseMoveEvent(QMouseEvent* event) override;
+    void mouseReleaseEvent(QMouseEvent* event) override;
+    void leaveEvent(QEvent* event) override;
+    void contextMenuEvent(QContextMenuEvent* event) override;
 
 private:
+    void rebuildProblem();
+    std::optional<Handle> handleAt(const QPointF& screen) const;
+    QRectF planRect() const;
+    QRectF toScreen(const Rect& r) const;
+
     Brief brief_;
-    Plan plan_;
-    int variant_ = -1;
+    Footprint fp_;
+    PlanVariant v_;
+    bool has_ = false;
     QString message_;
+    QString hovered_, highlighted_;
+    bool dimensions_ = false;
+    std::set<int> locked_;
+    std::unique_ptr<SizingProblem> problem_;
+    SizingResult state_; // segment positions of v_
+    double grid_ = 0;
+    // Drag state.
+    enum class Drag { None, Wall, Target } drag_ = Drag::None;
+    Handle dragHandle_;
+    int dragRoom_ = -1;
+    double dragStartY_ = 0, dragStartArea_ = 0, dragArea_ = 0;
+    PlanVariant beforeDrag_;
 };
 
 } // namespace abut::gui

@@ -52,8 +52,8 @@ public:
         const QFontMetricsF fm(font_);
         QStringList shown = lines_;
         QRectF box = box_;
-        if (box_.width() > disc * 1.5 + 8) {
-            const double room = std::max(44.0, disc * 1.5);
+        if (box_.width() > disc * 2.0 + 8) {
+            const double room = std::max(64.0, disc * 2.0);
             shown = {fm.elidedText(lines_.value(0), Qt::ElideMiddle, room)};
             const double w = fm.horizontalAdvance(shown[0]);
             box = QRectF(-w / 2 - 3, -fm.height() / 2 - 1, w + 6, fm.height() + 2);
@@ -94,6 +94,11 @@ public:
     void paint(QPainter* p, const QStyleOptionGraphicsItem* option, QWidget*) override {
         p->setRenderHint(QPainter::Antialiasing);
         const QRectF r = rect();
+        if (hovered) {
+            p->setPen(Qt::NoPen);
+            p->setBrush(QColor(0x1F, 0x5F, 0xBF, 60));
+            p->drawEllipse(r.adjusted(-9, -9, 9, 9));
+        }
         if (flagged) {
             QPen ring(problemInk, 3.0, Qt::DotLine);
             ring.setCosmetic(true);
@@ -117,6 +122,7 @@ public:
     RoomLabel* label = nullptr;
     std::vector<AdjacencyItem*> lines;
     bool flagged = false;
+    bool hovered = false;
 };
 
 // An adjacency: door solid, wall dashed; must thick, should thin.
@@ -185,6 +191,7 @@ SketchView::SketchView(QWidget* parent) : QGraphicsView(parent) {
     setBackgroundBrush(QColor(0xFB, 0xFA, 0xF7));
     setTransformationAnchor(QGraphicsView::AnchorUnderMouse);
     setFocusPolicy(Qt::StrongFocus);
+    viewport()->setMouseTracking(true);
     setToolTip(tr("Adjacency sketch: solid line = door, dashed = wall; thick = must, thin = should.\n"
                   "Double-click to add a room; C to draw adjacencies; Delete removes the selection."));
     connect(scene(), &QGraphicsScene::selectionChanged, this, [this] {
@@ -230,6 +237,7 @@ void SketchView::rebuild() {
         item->setPos(p ? toScene(*p) : QPointF(80.0 * double(i), 0));
         scene()->addItem(item);
         item->setSelected(keepRooms.contains(item->id));
+        item->hovered = item->id == hoverRoom_;
         rooms_.push_back(item);
     }
     for (std::size_t i = 0; i < brief.adjacencies.size(); ++i) {
@@ -246,6 +254,18 @@ void SketchView::rebuild() {
     applyMarks();
     rebuilding_ = false;
     if (autoFit_) fitAll();
+}
+
+void SketchView::setHoverRoom(const QString& id) {
+    if (hoverRoom_ == id) return;
+    hoverRoom_ = id;
+    for (RoomItem* r : rooms_) {
+        const bool on = r->id == id;
+        if (r->hovered != on) {
+            r->hovered = on;
+            r->update();
+        }
+    }
 }
 
 void SketchView::setMarks(const SketchMarks& marks) {
@@ -386,6 +406,14 @@ void SketchView::mouseMoveEvent(QMouseEvent* event) {
     if (rubberLine_ && connectFrom_) {
         rubberLine_->setLine(QLineF(connectFrom_->pos(), mapToScene(event->position().toPoint())));
         return;
+    }
+    if (event->buttons() == Qt::NoButton) {
+        RoomItem* r = roomAt(event->position().toPoint());
+        const QString id = r ? r->id : QString();
+        if (id != pointedRoom_) {
+            pointedRoom_ = id;
+            emit roomHovered(id);
+        }
     }
     QGraphicsView::mouseMoveEvent(event);
 }

@@ -53,6 +53,8 @@ public:
     void selectItems(const QStringList& rooms, const QList<int>& adjacencies);
 
     void setMarks(const SketchMarks& marks);
+    // A room pointed at elsewhere (plan, table): drawn with a halo.
+    void setHoverRoom(const QString& id);
     const SketchMarks& marks() const { return marks_; }
     // Scene position of a room (for tests and for placing new rooms).
     QPointF roomScenePos(const QString& id) const;
@@ -68,6 +70,7 @@ signals:
     void roomActivated(const QString& id);
     void connectModeChanged(bool on);
     void message(const QString& text);
+    void roomHovered(const QString& id); // "" when the pointer leaves rooms
 
 protected:
     void mousePressEvent(QMouseEvent* event) override;
@@ -101,6 +104,8 @@ private:
     RoomItem* connectFrom_ = nullptr;
     QGraphicsLineItem* rubberLine_ = nullptr;
     bool pressedOnRoom_ = false;
+    QString hoverRoom_;   // shown with a halo
+    QString pointedRoom_; // under the pointer in this view
 };
 
 } // namespace abut::gui

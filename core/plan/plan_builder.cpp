@@ -32,7 +32,6 @@ double sharedWall(const Rect& a, const Rect& b, double tol = 1e-9) {
 
 } // namespace
 
-
 namespace {
 
 // The hard minimum extents the sizer keeps, as longest-path weights.
@@ -98,8 +97,20 @@ void updateMetrics(const Brief& brief, const Footprint& fp, const ExtendedGraph&
     out.score = variantScore(brief, fp, out);
 }
 
+} // namespace
+
 // `v` with the rectangles of a sizing result, its metrics recomputed.
-PlanVariant withSizes(const Brief& brief, const Footprint& fp, const PlanVariant& v, const SizingResult& sized) {
+std::vector<Rect> vertexRects(const PlanVariant& v) {
+    std::vector<Rect> rects(v.extended.graph.vertexCount());
+    std::size_t room = 0, spare = 0;
+    for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
+        if (v.extended.isRoom(u) && room < v.rooms.size()) rects[u] = v.rooms[room++];
+        else if (v.extended.isSpare(u) && spare < v.spaces.size()) rects[u] = v.spaces[spare++];
+    }
+    return rects;
+}
+
+PlanVariant applySizing(const Brief& brief, const Footprint& fp, const PlanVariant& v, const SizingResult& sized) {
     PlanVariant out = v;
     out.rooms.clear();
     out.spaces.clear();
@@ -113,7 +124,6 @@ PlanVariant withSizes(const Brief& brief, const Footprint& fp, const PlanVariant
     return out;
 }
 
-} // namespace
 
 double variantScore(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
     double score = v.metrics.worstAreaError + 0.25 * v.metrics.meanAreaError;
@@ -302,7 +312,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
         if (!keepGoing(0.3 + 0.4 * double(i) / double(toSize), "sizing")) break;
         PlanVariant& v = plan.variants[i];
         const SizingProblem problem(brief, v.extended, v.labeling, plan.footprint, sizing);
-        PlanVariant candidate = withSizes(brief, plan.footprint, v, problem.solve());
+        PlanVariant candidate = applySizing(brief, plan.footprint, v, problem.solve());
         if (!checkVariant(brief, plan.footprint, candidate).empty()) continue; // keep the fitted one
         v = std::move(candidate);
         if (monitor && monitor->found) monitor->found(v);
@@ -386,7 +396,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
         }
         PlanVariant relabelled = v;
         relabelled.labeling = rel;
-        PlanVariant candidate = withSizes(brief, plan.footprint, relabelled, best);
+        PlanVariant candidate = applySizing(brief, plan.footprint, relabelled, best);
         candidate.oneSided = isOneSided(v.extended, rel);
         if (checkVariant(brief, plan.footprint, candidate).empty() && candidate.score <= v.score) {
             v = std::move(candidate);

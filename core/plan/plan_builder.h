@@ -36,6 +36,15 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options = {}, const PlanMo
 PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,
                           const PlanOptions& options);
 
+// `v` with the rectangles of a sizing result of its layout, its metrics,
+// dropped adjacencies, unmet requirements and score recomputed.
+PlanVariant applySizing(const Brief& brief, const Footprint& footprint, const PlanVariant& v,
+                        const SizingResult& sized);
+
+// The rectangles of a variant per vertex of its extended graph (rooms and
+// spare spaces in vertex order; poles empty), as the sizer indexes them.
+std::vector<Rect> vertexRects(const PlanVariant& v);
+
 // Independent-of-construction check of a variant against its brief: the
 // rectangles tile the footprint, every adjacency not listed as dropped is a
 // shared wall (doors at least doorWidth). Returns "" when valid.

@@ -68,13 +68,7 @@ private slots:
         o.doorWidth = b.doorWidth;
         o.anyWall = PlanOptions{}.anyWall;
         const SizingProblem problem(b, v.extended, v.labeling, plan.footprint, o);
-        std::vector<Rect> rects(v.extended.graph.vertexCount());
-        int spare = 0;
-        for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
-            if (v.extended.isRoom(u)) rects[u] = v.rooms[u];
-            else if (v.extended.isSpare(u)) rects[u] = v.spaces[spare++];
-        }
-        const SizingResult state = problem.stateOf(rects);
+        const SizingResult state = problem.stateOf(vertexRects(v));
         for (std::size_t i = 0; i < b.rooms.size(); ++i) QCOMPARE(state.rooms[i].area, v.rooms[i].area());
         const SegmentStructure& s = problem.segments();
         int moved = 0;
@@ -93,13 +87,7 @@ private slots:
                     const bool beside = s.west[i] == k || s.east[i] == k;
                     if (!beside) QCOMPARE(r.rooms[i].area, state.rooms[i].area);
                 }
-                PlanVariant dragged = v;
-                spare = 0;
-                dragged.spaces.clear();
-                for (int u = 0; u < v.extended.graph.vertexCount(); ++u) {
-                    if (v.extended.isRoom(u)) dragged.rooms[u] = r.rects[u];
-                    else if (v.extended.isSpare(u)) dragged.spaces.push_back(r.rects[u]);
-                }
+                const PlanVariant dragged = applySizing(b, plan.footprint, v, r);
                 QVERIFY2(checkVariant(b, plan.footprint, dragged).empty(), checkVariant(b, plan.footprint, dragged).c_str());
             }
             ++moved;

@@ -1,0 +1,247 @@
+// The editor's plan side driven as a planner would: variants arriving in the
+// background while the window stays responsive, cancel, choosing and pinning
+// variants, dragging a wall, typing a target, exporting. Runs offscreen.
+#include "brief/brief_edit.h"
+#include "brief_panel.h"
+#include "document.h"
+#include "io/project_io.h"
+#include "main_window.h"
+#include "plan/plan_builder.h"
+#include "plan/variant_key.h"
+#include "plan_runner.h"
+#include "plan_view.h"
+#include "schedule_panel.h"
+#include "variants_strip.h"
+
+#include <QElapsedTimer>
+#include <QListWidget>
+#include <QPushButton>
+#include <QTableWidget>
+#include <QTemporaryDir>
+#include <QtTest>
+
+using namespace abut;
+using namespace abut::gui;
+
+namespace {
+
+void waitForPlans(MainWindow& w, int ms = 60000) {
+    QTRY_VERIFY_WITH_TIMEOUT(!w.planning() && w.hasCurrentVariant(), ms);
+}
+
+} // namespace
+
+class TestPlans : public QObject {
+    Q_OBJECT
+
+    QTemporaryDir recoveryDir;
+    MainWindowOptions options() const {
+        MainWindowOptions o;
+        o.recoveryFolder = recoveryDir.path();
+        o.autosaveSeconds = 0;
+        o.planDelayMs = 50;
+        return o;
+    }
+
+private slots:
+    void initTestCase() { QStandardPaths::setTestModeEnabled(true); }
+
+    // A timer on the UI thread measures how late it fires while the largest
+    // sample's variants are computed; the window must never stall more than
+    // 50 ms, and variants must arrive.
+    void variantsArriveWhileResponsive() {
+        MainWindow w(options());
+        w.resize(1400, 900);
+        w.show();
+        QVERIFY(QTest::qWaitForWindowExposed(&w));
+        QVERIFY(w.openProject(ABUT_SAMPLES "/office-floor.abut.json"));
+        QElapsedTimer clock;
+        clock.start();
+        qint64 last = clock.elapsed(), worst = 0;
+        int ticks = 0, streamed = 0;
+        QTimer tick;
+        tick.setInterval(2);
+        connect(&tick, &QTimer::timeout, [&] {
+            const qint64 now = clock.elapsed();
+            worst = std::max(worst, now - last);
+            last = now;
+            ++ticks;
+        });
+        connect(w.planRunner(), &PlanRunner::variantFound, [&] { ++streamed; });
+        tick.start();
+        QTRY_VERIFY_WITH_TIMEOUT(!w.planning() && w.hasCurrentVariant(), 60000);
+        tick.stop();
+        qInfo("variants streamed %d, ticks %d, worst event-loop delay %lld ms", streamed, ticks,
+              static_cast<long long>(worst));
+        QVERIFY(streamed >= 1);                     // results arrive as they are found
+        QVERIFY(!w.variantsStrip()->shownKeys().isEmpty());
+        QVERIFY(ticks > 10);
+        QVERIFY2(worst <= 50, qPrintable(QString("the UI thread stalled %1 ms").arg(worst)));
+    }
+
+    void cancelStopsPromptly() {
+        MainWindow w(options());
+        w.show();
+        QVERIFY(w.openProject(ABUT_SAMPLES "/office-floor.abut.json"));
+        QTRY_VERIFY_WITH_TIMEOUT(w.planRunner()->busy() && w.variantsStrip()->cancelButton()->isVisible(), 10000);
+        QElapsedTimer t;
+        t.start();
+        QTest::mouseClick(w.variantsStrip()->cancelButton(), Qt::LeftButton);
+        QTRY_VERIFY_WITH_TIMEOUT(!w.planRunner()->busy(), 5000);
+        qInfo("stopped %lld ms after Cancel", static_cast<long long>(t.elapsed()));
+        QVERIFY(t.elapsed() < 2000);
+        QVERIFY(!w.variantsStrip()->cancelButton()->isVisible());
+        // A new edit starts the work again.
+        w.addRoomAt(QPointF(0, 0));
+        QTRY_VERIFY_WITH_TIMEOUT(w.planRunner()->busy(), 5000);
+        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+    }
+
+    // Dragging a wall with the mouse: only the rooms beside it change, the
+    // wall stops at the end of its allowed range however far the pointer
+    // goes, the two rooms' targets follow, and one undo puts them back.
+    void wallDragChangesAdjacentRoomsWithinRange() {
+        MainWindow w(options());
+        w.resize(1400, 900);
+        w.show();
+        QVERIFY(QTest::qWaitForWindowExposed(&w));
+        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        waitForPlans(w);
+        PlanView* view = w.planView();
+        const std::vector<PlanView::Handle> handles = view->handles();
+        QVERIFY(!handles.empty());
+        // A vertical wall, dragged far to the east.
+        auto it = std::find_if(handles.begin(), handles.end(), [](const PlanView::Handle& h) { return h.vertical; });
+        QVERIFY(it != handles.end());
+        const PlanView::Handle h = *it;
+        const PlanVariant before = w.currentVariant();
+        const Brief briefBefore = w.brief();
+        const QPoint from = view->screenPointOn(h).toPoint();
+        QTest::mousePress(view, Qt::LeftButton, {}, from);
+        for (int dx = 10; dx <= 600; dx += 10) QTest::mouseMove(view, from + QPoint(dx, 0));
+        QTest::mouseRelease(view, Qt::LeftButton, {}, from + QPoint(600, 0));
+        QCOMPARE(w.document()->undoStack()->count(), 1);
+        const PlanVariant& after = w.currentVariant();
+        const Brief& b = w.brief();
+        int changed = 0;
+        for (std::size_t i = 0; i < b.rooms.size(); ++i) {
+            const bool west = std::abs(before.rooms[i].x1 - h.position) < 1e-9 && before.rooms[i].y0 < h.to && before.rooms[i].y1 > h.from;
+            const bool east = std::abs(before.rooms[i].x0 - h.position) < 1e-9 && before.rooms[i].y0 < h.to && before.rooms[i].y1 > h.from;
+            if (west || east) {
+                // Beside the wall: it stopped exactly at the end of its range.
+                QCOMPARE(west ? after.rooms[i].x1 : after.rooms[i].x0, h.hi);
+                if (std::abs(after.rooms[i].area() - before.rooms[i].area()) > 1e-9) {
+                    ++changed;
+                    QCOMPARE(b.rooms[i].area, std::round(after.rooms[i].area() * 100) / 100);
+                }
+            } else {
+                QCOMPARE(after.rooms[i].area(), before.rooms[i].area()); // nothing else moves
+                QCOMPARE(b.rooms[i].area, briefBefore.rooms[i].area);
+            }
+        }
+        QVERIFY(changed >= 2);
+        QVERIFY(checkVariant(b, b.effectiveFootprint(), after).empty());
+        // The schedule shows the new areas.
+        QTableWidget* schedule = w.schedulePanel()->table();
+        QCOMPARE(schedule->item(0, 2)->text(), QString::number(after.rooms[0].area(), 'f', 1));
+        w.document()->undoStack()->undo();
+        QCOMPARE(serializeProject(w.brief()), serializeProject(briefBefore));
+        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+    }
+
+    void typingTargetResizesAtOnce() {
+        MainWindow w(options());
+        w.show();
+        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        waitForPlans(w);
+        const PlanVariant before = w.currentVariant();
+        // The room with the most slack: grow its target by a fifth.
+        const int room = 0;
+        const double was = before.rooms[room].area();
+        QTableWidget* t = w.briefPanel()->roomTable();
+        t->item(room, BriefPanel::Area)->setText(QString::number(w.brief().rooms[room].area * 1.2));
+        // Re-sized on the spot, before any new plan computation finishes.
+        QVERIFY(w.planning());
+        QVERIFY(w.currentVariant().rooms[room].area() > was + 1e-6);
+        QVERIFY(checkVariant(w.brief(), w.brief().effectiveFootprint(), w.currentVariant()).empty());
+        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+    }
+
+    void pinningSurvivesSaveAndOpen() {
+        QTemporaryDir dir;
+        const QString path = dir.filePath(QStringLiteral("clinic.abut.json"));
+        QString pinned;
+        {
+            MainWindow w(options());
+            w.show();
+            QVERIFY(w.openProject(ABUT_SAMPLES "/clinic.abut.json"));
+            waitForPlans(w);
+            VariantsStrip* strip = w.variantsStrip();
+            QVERIFY(strip->list()->count() >= 2);
+            // Choose the second variant in the strip and pin it.
+            strip->list()->setCurrentRow(1);
+            pinned = strip->currentKey();
+            QCOMPARE(QString::fromStdString(variantKey(w.brief(), w.currentVariant())), pinned);
+            emit strip->pinRequested(pinned, true);
+            QCOMPARE(w.brief().pinnedVariants, std::vector<std::string>{pinned.toStdString()});
+            // Pinned variants come first, with a star.
+            QCOMPARE(strip->shownKeys().front(), pinned);
+            QVERIFY(strip->list()->item(0)->text().startsWith(QChar(0x2605)));
+            // Hide another one: it leaves the strip.
+            const QString other = strip->shownKeys().at(1);
+            emit strip->hideRequested(other, true);
+            QVERIFY(!strip->shownKeys().contains(other));
+            QVERIFY(w.saveTo(path));
+        }
+        MainWindow w2(options());
+        w2.show();
+        QVERIFY(w2.openProject(path));
+        QCOMPARE(w2.brief().pinnedVariants, std::vector<std::string>{pinned.toStdString()});
+        waitForPlans(w2);
+        QCOMPARE(w2.variantsStrip()->shownKeys().front(), pinned); // found again, first
+        QCOMPARE(w2.brief().hiddenVariants.size(), std::size_t(1));
+        QVERIFY(!w2.variantsStrip()->shownKeys().contains(QString::fromStdString(w2.brief().hiddenVariants[0])));
+    }
+
+    void filterBySide() {
+        MainWindow w(options());
+        w.show();
+        QVERIFY(w.openProject(ABUT_SAMPLES "/clinic.abut.json"));
+        waitForPlans(w);
+        const QString room = QString::fromStdString(w.brief().rooms[0].id); // the entrance wishes S
+        w.variantsStrip()->setFilter(room, 2);
+        const QStringList shown = w.variantsStrip()->shownKeys();
+        for (const PlanVariant& v : w.variants()) {
+            const bool south = v.rooms[0].y0 <= 1e-9;
+            QCOMPARE(shown.contains(QString::fromStdString(variantKey(w.brief(), v))), south);
+        }
+    }
+
+    void exportFromTheWindow_data() {
+        QTest::addColumn<QString>("name");
+        QTest::addColumn<QByteArray>("starts");
+        QTest::newRow("pdf") << "plan.pdf" << QByteArray("%PDF");
+        QTest::newRow("dxf") << "plan.dxf" << QByteArray("  0\r\nSECTION");
+        QTest::newRow("svg") << "plan.svg" << QByteArray("<?xml");
+        QTest::newRow("png") << "plan.png" << QByteArray("\x89PNG");
+        QTest::newRow("csv") << "plan.csv" << QByteArray("room,name");
+    }
+    void exportFromTheWindow() {
+        QFETCH(QString, name);
+        QFETCH(QByteArray, starts);
+        MainWindow w(options());
+        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        waitForPlans(w);
+        QTemporaryDir dir;
+        QString error;
+        QVERIFY2(w.exportCurrent(dir.filePath(name), &error), qPrintable(error));
+        QFile f(dir.filePath(name));
+        QVERIFY(f.open(QIODevice::ReadOnly));
+        const QByteArray head = f.read(64);
+        QVERIFY2(head.startsWith(starts) || (name.endsWith(".dxf") && head.trimmed().startsWith("0")),
+                 head.constData());
+    }
+};
+
+QTEST_MAIN(TestPlans)
+#include "tst_plans.moc"
