@@ -167,6 +167,101 @@ private slots:
         w.ask = [](auto&&...) { return QMessageBox::Discard; };
     }
 
+    // Alt+drag up on a room raises its target; the plan follows while the
+    // pointer moves, and the whole drag is one undo step.
+    void targetDragResizesLive() {
+        MainWindow w(options());
+        w.resize(1400, 900);
+        w.show();
+        QVERIFY(QTest::qWaitForWindowExposed(&w));
+        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        waitForPlans(w);
+        PlanView* view = w.planView();
+        const int room = 0;
+        const double target = w.brief().rooms[room].area;
+        const double area = w.currentVariant().rooms[room].area();
+        const QPoint at = view->toScreen(w.currentVariant().rooms[room].x0 + 0.3 * w.currentVariant().rooms[room].width(),
+                                         w.currentVariant().rooms[room].y0 + 0.5 * w.currentVariant().rooms[room].depth())
+                              .toPoint();
+        QCOMPARE(view->roomAt(at), QString::fromStdString(w.brief().rooms[room].id));
+        QTest::mousePress(view, Qt::LeftButton, Qt::AltModifier, at);
+        QTest::mouseMove(view, at - QPoint(0, 40));
+        const double midDrag = view->variant().rooms[room].area();
+        QVERIFY(midDrag > area + 1e-6); // live, before the release
+        QTest::mouseMove(view, at - QPoint(0, 60));
+        QTest::mouseRelease(view, Qt::LeftButton, Qt::AltModifier, at - QPoint(0, 60));
+        QCOMPARE(w.document()->undoStack()->count(), 1);
+        QVERIFY(w.brief().rooms[room].area > target * 1.2);
+        QVERIFY(w.currentVariant().rooms[room].area() > area);
+        w.document()->undoStack()->undo();
+        QCOMPARE(w.brief().rooms[room].area, target);
+        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+    }
+
+    // A locked room keeps its rectangle while another room's target changes.
+    void lockedRoomKeepsItsSize() {
+        MainWindow w(options());
+        w.show();
+        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        waitForPlans(w);
+        const Rect kept = w.currentVariant().rooms[1];
+        emit w.planView()->lockToggled(1);
+        w.briefPanel()->roomTable()->item(0, BriefPanel::Area)->setText(QString::number(w.brief().rooms[0].area * 1.3));
+        const Rect now = w.currentVariant().rooms[1];
+        QCOMPARE(now.x0, kept.x0);
+        QCOMPARE(now.y0, kept.y0);
+        QCOMPARE(now.x1, kept.x1);
+        QCOMPARE(now.y1, kept.y1);
+        // Its walls are not offered for dragging.
+        for (const PlanView::Handle& h : w.planView()->handles())
+            QVERIFY(!(h.vertical && (std::abs(h.position - kept.x0) < 1e-9 || std::abs(h.position - kept.x1) < 1e-9) &&
+                      h.from < kept.y1 && h.to > kept.y0));
+        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+    }
+
+    void wallSnapsToPlanningGrid() {
+        MainWindow w(options());
+        w.resize(1400, 900);
+        w.show();
+        QVERIFY(QTest::qWaitForWindowExposed(&w));
+        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        waitForPlans(w);
+        w.planView()->setGrid(0.3);
+        const double g = 0.3;
+        for (const PlanView::Handle& h : w.planView()->handles()) {
+            if (!h.vertical || std::ceil(h.lo / g) * g > h.hi) continue; // needs a grid line in range
+            const QPoint from = w.planView()->screenPointOn(h).toPoint();
+            const int dx = int(0.37 * (h.hi - h.position) * w.planView()->pixelsPerUnit());
+            QTest::mousePress(w.planView(), Qt::LeftButton, {}, from);
+            QTest::mouseMove(w.planView(), from + QPoint(dx, 0));
+            QTest::mouseRelease(w.planView(), Qt::LeftButton, {}, from + QPoint(dx, 0));
+            // The wall now lies on a multiple of the module.
+            bool onGrid = false;
+            for (const PlanView::Handle& k : w.planView()->handles())
+                if (k.vertical && k.segment == h.segment) onGrid = std::abs(k.position / g - std::round(k.position / g)) < 1e-6;
+            QVERIFY(onGrid);
+            w.ask = [](auto&&...) { return QMessageBox::Discard; };
+            return;
+        }
+        QSKIP("no wall with a grid line in its range");
+    }
+
+    // Pointing at a room in the plan marks it in the sketch and the table.
+    void hoverIsShared() {
+        MainWindow w(options());
+        w.resize(1400, 900);
+        w.show();
+        QVERIFY(QTest::qWaitForWindowExposed(&w));
+        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        waitForPlans(w);
+        const Rect r = w.currentVariant().rooms[2];
+        const QPoint at = w.planView()->toScreen(0.5 * (r.x0 + r.x1), 0.5 * (r.y0 + r.y1)).toPoint();
+        QTest::mouseMove(w.planView(), at);
+        QTableWidget* t = w.briefPanel()->roomTable();
+        QVERIFY(t->item(2, 0)->font().bold());
+        QVERIFY(!t->item(1, 0)->font().bold());
+    }
+
     void pinningSurvivesSaveAndOpen() {
         QTemporaryDir dir;
         const QString path = dir.filePath(QStringLiteral("clinic.abut.json"));
