@@ -636,7 +636,14 @@ void MainWindow::startPlanning() {
 
 void MainWindow::variantFound(const PlanVariant& v, quint64 revision) {
     if (revision != doc_->revision()) return;
-    variants_.push_back(v);
+    // The same arrangement found again (improved, or from another graph): keep the better one.
+    const Brief& brief = doc_->brief();
+    const std::string key = variantKey(brief, v);
+    auto same = std::find_if(variants_.begin(), variants_.end(),
+                             [&](const PlanVariant& o) { return variantKey(brief, o) == key; });
+    if (same == variants_.end()) variants_.push_back(v);
+    else if (v.score < same->score) *same = v;
+    else return;
     std::stable_sort(variants_.begin(), variants_.end(),
                      [](const PlanVariant& a, const PlanVariant& b) { return a.score < b.score; });
     for (std::size_t i = 0; i < variants_.size(); ++i) variants_[i].rank = int(i) + 1;
@@ -820,29 +827,32 @@ void MainWindow::deleteSelection() {
 }
 
 void MainWindow::toggleKind() {
-    const QList<int> adj = sketch_->selectedAdjacencies();
-    if (adj.isEmpty()) {
-        status(tr("Select one or more adjacency lines first."));
-        return;
-    }
-    Brief b = doc_->brief();
-    bool allDoors = true;
-    for (int i : adj) allDoors &= b.adjacencies[i].kind == AdjacencyKind::Door;
-    for (int i : adj) b.adjacencies[i].kind = allDoors ? AdjacencyKind::Wall : AdjacencyKind::Door;
-    doc_->edit(allDoors ? tr("Make walls") : tr("Make doors"), b);
+    toggleSelectedAdjacencies([](Adjacency& a, bool allFirst) {
+        a.kind = allFirst ? AdjacencyKind::Wall : AdjacencyKind::Door;
+    }, [](const Adjacency& a) { return a.kind == AdjacencyKind::Door; }, tr("Make walls"), tr("Make doors"));
 }
 
 void MainWindow::togglePriority() {
+    toggleSelectedAdjacencies([](Adjacency& a, bool allFirst) {
+        a.priority = allFirst ? Priority::Should : Priority::Must;
+    }, [](const Adjacency& a) { return a.priority == Priority::Must; }, tr("Make should"), tr("Make must"));
+}
+
+// Door ↔ wall and must ↔ should: when every selected adjacency is the first
+// kind they all switch to the second, otherwise all become the first.
+void MainWindow::toggleSelectedAdjacencies(const std::function<void(Adjacency&, bool)>& set,
+                                           const std::function<bool(const Adjacency&)>& isFirst,
+                                           const QString& toSecond, const QString& toFirst) {
     const QList<int> adj = sketch_->selectedAdjacencies();
     if (adj.isEmpty()) {
         status(tr("Select one or more adjacency lines first."));
         return;
     }
     Brief b = doc_->brief();
-    bool allMust = true;
-    for (int i : adj) allMust &= b.adjacencies[i].priority == Priority::Must;
-    for (int i : adj) b.adjacencies[i].priority = allMust ? Priority::Should : Priority::Must;
-    doc_->edit(allMust ? tr("Make should") : tr("Make must"), b);
+    bool allFirst = true;
+    for (int i : adj) allFirst = allFirst && isFirst(b.adjacencies[i]);
+    for (int i : adj) set(b.adjacencies[i], allFirst);
+    doc_->edit(allFirst ? toSecond : toFirst, b);
 }
 
 void MainWindow::tidyUp() {

@@ -115,6 +115,9 @@ private:
     void diagnosticClicked(QListWidgetItem* item);
     void syncSelection(const QStringList& rooms, const QList<int>& adjacencies, QObject* from);
     void status(const QString& text);
+    void toggleSelectedAdjacencies(const std::function<void(Adjacency&, bool)>& set,
+                                   const std::function<bool(const Adjacency&)>& isFirst, const QString& toSecond,
+                                   const QString& toFirst);
 
     MainWindowOptions options_;
     Document* doc_ = nullptr;

@@ -9,6 +9,9 @@ namespace abut::gui {
 
 PlanRunner::PlanRunner(QObject* parent) : QObject(parent) {
     pool_.setMaxThreadCount(1);
+    // Below every normal thread (SCHED_IDLE on Linux): the window always gets
+    // the processor first, the plans take what is left.
+    pool_.setThreadPriority(QThread::IdlePriority);
     connect(&watcher_, &QFutureWatcher<PlanUpdate>::resultsReadyAt, this, &PlanRunner::resultsAt);
     connect(&watcher_, &QFutureWatcher<PlanUpdate>::progressValueChanged, this,
             [this](int v) { emit progress(v, watcher_.progressText()); });
@@ -43,6 +46,7 @@ void PlanRunner::cancel() {
 void PlanRunner::launch() {
     pending_ = false;
     cancelled_ = false;
+    running_ = true;
     const Brief brief = brief_;
     watcher_.setFuture(QtConcurrent::run(&pool_, [brief](QPromise<PlanUpdate>& promise) {
         promise.setProgressRange(0, 1000);
@@ -73,6 +77,7 @@ void PlanRunner::resultsAt(int begin, int end) {
 }
 
 void PlanRunner::done() {
+    running_ = false;
     if (pending_) {
         launch();
         return;

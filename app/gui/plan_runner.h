@@ -17,7 +17,7 @@ struct PlanUpdate {
 };
 
 // Computes plans off the UI thread, one computation at a time, on a pool of
-// its own with one thread (a core stays free for the window). start() while
+// its own with one thread at idle priority (the window comes first). start() while
 // a computation runs cancels it and starts the new one as soon as it stops;
 // results of a cancelled computation are not reported.
 class PlanRunner : public QObject {
@@ -28,7 +28,8 @@ public:
 
     void start(const Brief& brief, quint64 revision);
     void cancel();
-    bool busy() const { return watcher_.isRunning() || pending_; }
+    // Until the last result has been reported (the future may finish earlier).
+    bool busy() const { return running_ || pending_; }
     quint64 revision() const { return revision_; }
 
 signals:
@@ -48,6 +49,7 @@ private:
     quint64 revision_ = 0;
     bool pending_ = false;   // a newer start() waits for the running one to stop
     bool cancelled_ = false; // the running one was cancelled
+    bool running_ = false;   // launched, finished() not yet handled
 };
 
 } // namespace abut::gui

@@ -1,8 +1,10 @@
 #include "plan/plan_builder.h"
+#include "plan/variant_key.h"
 
 #include "label/labeling_lattice.h"
 
 #include <algorithm>
+#include <set>
 #include <cmath>
 #include <numeric>
 #include <random>
@@ -404,26 +406,19 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
         }
     }
     std::stable_sort(plan.variants.begin(), plan.variants.end(), sizedFirst);
-    // The same rectangles reached twice (two labelings of graphs that differ
-    // only by an added contact can coincide) count once.
-    auto same = [](const PlanVariant& a, const PlanVariant& b) {
-        if (a.rooms.size() != b.rooms.size() || a.spaces.size() != b.spaces.size()) return false;
-        for (std::size_t i = 0; i < a.rooms.size(); ++i)
-            if (std::abs(a.rooms[i].x0 - b.rooms[i].x0) > 1e-6 || std::abs(a.rooms[i].y0 - b.rooms[i].y0) > 1e-6 ||
-                std::abs(a.rooms[i].x1 - b.rooms[i].x1) > 1e-6 || std::abs(a.rooms[i].y1 - b.rooms[i].y1) > 1e-6)
-                return false;
-        return true;
-    };
     if (plan.variants.empty()) { // stopped before the first layout
         plan.status = stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
         plan.summary = stopped ? "Stopped before any variant was found." : aug.summary;
         return plan;
     }
+    // One variant per arrangement of rooms (the same arrangement is reached
+    // from graphs that differ only by an added contact, or sized twice), the
+    // better ranked kept: the planner compares arrangements, not sizings.
     std::vector<PlanVariant> kept;
+    std::set<std::string> keys;
     for (PlanVariant& v : plan.variants) {
         if (static_cast<int>(kept.size()) >= options.variants) break;
-        if (std::none_of(kept.begin(), kept.end(), [&](const PlanVariant& k) { return same(k, v); }))
-            kept.push_back(std::move(v));
+        if (keys.insert(variantKey(brief, v)).second) kept.push_back(std::move(v));
     }
     plan.variants = std::move(kept);
     for (std::size_t i = 0; i < plan.variants.size(); ++i) plan.variants[i].rank = static_cast<int>(i) + 1;

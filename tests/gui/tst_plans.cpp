@@ -29,6 +29,19 @@ void waitForPlans(MainWindow& w, int ms = 60000) {
     QTRY_VERIFY_WITH_TIMEOUT(!w.planning() && w.hasCurrentVariant(), ms);
 }
 
+// A window on screen (offscreen) with a sample open; unsaved changes are
+// dropped without asking when it closes.
+std::unique_ptr<MainWindow> windowOn(const MainWindowOptions& o, const char* sample) {
+    auto w = std::make_unique<MainWindow>(o);
+    w->ask = [](auto&&...) { return QMessageBox::Discard; };
+    w->resize(1400, 900);
+    w->show();
+    if (!QTest::qWaitForWindowExposed(w.get())) return nullptr;
+    if (!w->openProject(QStringLiteral(ABUT_SAMPLES "/") + QLatin1String(sample) + QStringLiteral(".abut.json")))
+        return nullptr;
+    return w;
+}
+
 } // namespace
 
 class TestPlans : public QObject {
@@ -94,18 +107,15 @@ private slots:
         // A new edit starts the work again.
         w.addRoomAt(QPointF(0, 0));
         QTRY_VERIFY_WITH_TIMEOUT(w.planRunner()->busy(), 5000);
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
     }
 
     // Dragging a wall with the mouse: only the rooms beside it change, the
     // wall stops at the end of its allowed range however far the pointer
     // goes, the two rooms' targets follow, and one undo puts them back.
     void wallDragChangesAdjacentRoomsWithinRange() {
-        MainWindow w(options());
-        w.resize(1400, 900);
-        w.show();
-        QVERIFY(QTest::qWaitForWindowExposed(&w));
-        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        const auto window = windowOn(options(), "family-house");
+        QVERIFY(window);
+        MainWindow& w = *window;
         waitForPlans(w);
         PlanView* view = w.planView();
         const std::vector<PlanView::Handle> handles = view->handles();
@@ -146,13 +156,12 @@ private slots:
         QCOMPARE(schedule->item(0, 2)->text(), QString::number(after.rooms[0].area(), 'f', 1));
         w.document()->undoStack()->undo();
         QCOMPARE(serializeProject(w.brief()), serializeProject(briefBefore));
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
     }
 
     void typingTargetResizesAtOnce() {
-        MainWindow w(options());
-        w.show();
-        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        const auto window = windowOn(options(), "family-house");
+        QVERIFY(window);
+        MainWindow& w = *window;
         waitForPlans(w);
         const PlanVariant before = w.currentVariant();
         // The room with the most slack: grow its target by a fifth.
@@ -164,17 +173,14 @@ private slots:
         QVERIFY(w.planning());
         QVERIFY(w.currentVariant().rooms[room].area() > was + 1e-6);
         QVERIFY(checkVariant(w.brief(), w.brief().effectiveFootprint(), w.currentVariant()).empty());
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
     }
 
     // Alt+drag up on a room raises its target; the plan follows while the
     // pointer moves, and the whole drag is one undo step.
     void targetDragResizesLive() {
-        MainWindow w(options());
-        w.resize(1400, 900);
-        w.show();
-        QVERIFY(QTest::qWaitForWindowExposed(&w));
-        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        const auto window = windowOn(options(), "family-house");
+        QVERIFY(window);
+        MainWindow& w = *window;
         waitForPlans(w);
         PlanView* view = w.planView();
         const int room = 0;
@@ -195,14 +201,13 @@ private slots:
         QVERIFY(w.currentVariant().rooms[room].area() > area);
         w.document()->undoStack()->undo();
         QCOMPARE(w.brief().rooms[room].area, target);
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
     }
 
     // A locked room keeps its rectangle while another room's target changes.
     void lockedRoomKeepsItsSize() {
-        MainWindow w(options());
-        w.show();
-        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        const auto window = windowOn(options(), "family-house");
+        QVERIFY(window);
+        MainWindow& w = *window;
         waitForPlans(w);
         const Rect kept = w.currentVariant().rooms[1];
         emit w.planView()->lockToggled(1);
@@ -216,15 +221,12 @@ private slots:
         for (const PlanView::Handle& h : w.planView()->handles())
             QVERIFY(!(h.vertical && (std::abs(h.position - kept.x0) < 1e-9 || std::abs(h.position - kept.x1) < 1e-9) &&
                       h.from < kept.y1 && h.to > kept.y0));
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
     }
 
     void wallSnapsToPlanningGrid() {
-        MainWindow w(options());
-        w.resize(1400, 900);
-        w.show();
-        QVERIFY(QTest::qWaitForWindowExposed(&w));
-        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        const auto window = windowOn(options(), "family-house");
+        QVERIFY(window);
+        MainWindow& w = *window;
         waitForPlans(w);
         w.planView()->setGrid(0.3);
         const double g = 0.3;
@@ -248,11 +250,9 @@ private slots:
 
     // Pointing at a room in the plan marks it in the sketch and the table.
     void hoverIsShared() {
-        MainWindow w(options());
-        w.resize(1400, 900);
-        w.show();
-        QVERIFY(QTest::qWaitForWindowExposed(&w));
-        QVERIFY(w.openProject(ABUT_SAMPLES "/family-house.abut.json"));
+        const auto window = windowOn(options(), "family-house");
+        QVERIFY(window);
+        MainWindow& w = *window;
         waitForPlans(w);
         const Rect r = w.currentVariant().rooms[2];
         const QPoint at = w.planView()->toScreen(0.5 * (r.x0 + r.x1), 0.5 * (r.y0 + r.y1)).toPoint();
@@ -276,6 +276,7 @@ private slots:
             // Choose the second variant in the strip and pin it.
             strip->list()->setCurrentRow(1);
             pinned = strip->currentKey();
+
             QCOMPARE(QString::fromStdString(variantKey(w.brief(), w.currentVariant())), pinned);
             emit strip->pinRequested(pinned, true);
             QCOMPARE(w.brief().pinnedVariants, std::vector<std::string>{pinned.toStdString()});
@@ -299,9 +300,9 @@ private slots:
     }
 
     void filterBySide() {
-        MainWindow w(options());
-        w.show();
-        QVERIFY(w.openProject(ABUT_SAMPLES "/clinic.abut.json"));
+        const auto window = windowOn(options(), "clinic");
+        QVERIFY(window);
+        MainWindow& w = *window;
         waitForPlans(w);
         const QString room = QString::fromStdString(w.brief().rooms[0].id); // the entrance wishes S
         w.variantsStrip()->setFilter(room, 2);
