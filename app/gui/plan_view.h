@@ -36,6 +36,7 @@ public:
     const PlanVariant& variant() const { return v_; }
 
     void setHighlightedRoom(const QString& id);
+    const QString& highlightedRoom() const { return highlighted_; }
     void setShowDimensions(bool on);
     void setLockedRooms(const std::set<int>& rooms);
     // Planning module walls snap to while dragged (0 = none), plan units.

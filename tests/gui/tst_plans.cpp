@@ -256,10 +256,15 @@ private slots:
         waitForPlans(w);
         const Rect r = w.currentVariant().rooms[2];
         const QPoint at = w.planView()->toScreen(0.5 * (r.x0 + r.x1), 0.5 * (r.y0 + r.y1)).toPoint();
-        QTest::mouseMove(w.planView(), at);
+        // Sent to the view itself: the pointer's path through the window is not under test.
+        QMouseEvent move(QEvent::MouseMove, at, w.planView()->mapToGlobal(at), Qt::NoButton, Qt::NoButton, Qt::NoModifier);
+        QCoreApplication::sendEvent(w.planView(), &move);
         QTableWidget* t = w.briefPanel()->roomTable();
         QVERIFY(t->item(2, 0)->font().bold());
         QVERIFY(!t->item(1, 0)->font().bold());
+        // And back: pointing at a row of the table marks the room in the plan.
+        emit t->cellEntered(4, 0);
+        QCOMPARE(w.planView()->highlightedRoom(), QString::fromStdString(w.brief().rooms[4].id));
     }
 
     void pinningSurvivesSaveAndOpen() {
