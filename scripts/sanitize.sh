@@ -14,7 +14,7 @@ cd build-sanitize
 export ASAN_OPTIONS=halt_on_error=1:detect_leaks=1:abort_on_error=0
 export UBSAN_OPTIONS=halt_on_error=1:print_stacktrace=1
 # The 10,000-brief property run takes about 6 minutes natively and some ten
-# times longer under the sanitizers: here 600 briefs in batches of 100.
-export ABUT_PROPERTY_BRIEFS="${ABUT_PROPERTY_BRIEFS:-600}"
-export ABUT_PROPERTY_BATCH="${ABUT_PROPERTY_BATCH:-100}"
+# times longer under the sanitizers: here 400 briefs in batches of 50.
+export ABUT_PROPERTY_BRIEFS="${ABUT_PROPERTY_BRIEFS:-400}"
+export ABUT_PROPERTY_BATCH="${ABUT_PROPERTY_BATCH:-50}"
 QT_QPA_PLATFORM=offscreen ctest --output-on-failure -L 'core|fuzz' "$@"

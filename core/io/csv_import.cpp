@@ -286,8 +286,65 @@ std::vector<CsvRow> splitCsv(const std::string& text, char separator) {
     return rows;
 }
 
-CsvImportResult importCsv(const std::string& text, const std::string& fileName, const Brief& into) {
+namespace {
+
+// Well-formed UTF-8 as RFC 3629 defines it (no overlong forms, no surrogates,
+// nothing above U+10FFFF): what the JSON writer accepts.
+bool validUtf8(const std::string& s) {
+    std::size_t i = 0;
+    auto byte = [&](std::size_t k) { return static_cast<unsigned char>(s[k]); };
+    while (i < s.size()) {
+        const unsigned char c = byte(i);
+        int more = 0;
+        unsigned char lo = 0x80, hi = 0xBF; // range of the second byte
+        if (c < 0x80) more = 0;
+        else if (c >= 0xC2 && c <= 0xDF) more = 1;
+        else if (c >= 0xE0 && c <= 0xEF) {
+            more = 2;
+            if (c == 0xE0) lo = 0xA0;
+            if (c == 0xED) hi = 0x9F;
+        } else if (c >= 0xF0 && c <= 0xF4) {
+            more = 3;
+            if (c == 0xF0) lo = 0x90;
+            if (c == 0xF4) hi = 0x8F;
+        } else {
+            return false;
+        }
+        for (int k = 1; k <= more; ++k) {
+            if (i + k >= s.size()) return false;
+            const unsigned char b = byte(i + k);
+            if (k == 1 ? (b < lo || b > hi) : (b >> 6) != 0x2) return false;
+        }
+        i += more + 1;
+    }
+    return true;
+}
+
+// Spreadsheet programs often save CSV in a Windows code page: read it as
+// Latin-1 (ISO 8859-1), whose bytes are the first 256 code points.
+std::string latin1ToUtf8(const std::string& s) {
+    std::string out;
+    out.reserve(s.size() * 2);
+    for (char ch : s) {
+        const unsigned char c = static_cast<unsigned char>(ch);
+        if (c < 0x80) {
+            out += ch;
+        } else {
+            out += static_cast<char>(0xC0 | (c >> 6));
+            out += static_cast<char>(0x80 | (c & 0x3F));
+        }
+    }
+    return out;
+}
+
+} // namespace
+
+CsvImportResult importCsv(const std::string& raw, const std::string& fileName, const Brief& into) {
     Importer im{fileName, into, {}};
+    // Names end up in the project file, which is UTF-8 JSON.
+    const bool utf8 = validUtf8(raw);
+    const std::string text = utf8 ? raw : latin1ToUtf8(raw);
+    if (!utf8) im.result.notes.push_back("The file is not UTF-8; it was read as Latin-1 (Windows).");
     const std::vector<CsvRow> rows = splitCsv(text, detectSeparator(text));
     if (rows.empty()) {
         im.error(0, "the file is empty; expected a room list or an adjacency matrix");

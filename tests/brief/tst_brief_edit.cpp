@@ -187,6 +187,26 @@ private slots:
         QVERIFY(!r.notes.empty());
     }
 
+    // Found by fuzz_csv_import: a byte that is not UTF-8 in a header made a
+    // room name that could not be written as JSON (the editor aborted on save).
+    // Such files come from spreadsheets saved in a Windows code page; they are
+    // now read as Latin-1.
+    void csvLatin1NamesImported() {
+        const CsvImportResult fuzz = importCsvFile(ABUT_TEST_DATA "/csv/valid/fuzz-latin1-header.csv", Brief{});
+        QVERIFY(fuzz.ok());
+        QVERIFY(parseProject(serializeProject(fuzz.brief), "again").ok());
+        const CsvImportResult r = importCsvFile(ABUT_TEST_DATA "/csv/valid/latin1-room-list.csv", Brief{});
+        QVERIFY(r.ok());
+        QCOMPARE(QString::fromStdString(r.brief.rooms[0].name), QString::fromUtf8("Salle \u00e0 manger"));
+        QCOMPARE(QString::fromStdString(r.brief.rooms[0].category), QString::fromUtf8("s\u00e9jour"));
+        QVERIFY(QString::fromStdString(r.notes.front()).contains("Latin-1"));
+        QVERIFY(parseProject(serializeProject(r.brief), "again").ok());
+        // An encoded surrogate is not UTF-8 either.
+        const CsvImportResult s = importCsvFile(ABUT_TEST_DATA "/csv/valid/surrogate-name.csv", Brief{});
+        QVERIFY(s.ok());
+        QVERIFY(parseProject(serializeProject(s.brief), "again").ok());
+    }
+
     void csvInvalid_data() {
         QTest::addColumn<QString>("file");
         QTest::addColumn<QString>("expected");
