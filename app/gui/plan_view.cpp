@@ -338,20 +338,31 @@ void PlanView::paintEvent(QPaintEvent*) {
         const QStringList lines{QString::fromStdString(room.displayName()),
                                 tr("%1 of %2 %3").arg(area, 0, 'f', 1).arg(room.area, 0, 'f', 1).arg(u2),
                                 deviationText(dev)};
-        QFont f = font();
+        // Narrow tall rooms get their label turned to run up the room, when
+        // that gives the larger text.
         const QRectF inner = box.adjusted(4, 3, -4, -3);
-        const double px = fitFont(f, lines, inner.width(), std::min(15.0, inner.height() / 3.6));
+        QFont across = font(), up = font();
+        const double pxAcross = fitFont(across, lines, inner.width(), std::min(15.0, inner.height() / 3.6));
+        const double pxUp = fitFont(up, lines, inner.height(), std::min(15.0, inner.width() / 3.6));
+        const bool turn = pxUp > pxAcross * 1.2 && inner.height() > inner.width();
+        const QFont f = turn ? up : across;
+        p.save();
+        p.translate(inner.center());
+        if (turn) p.rotate(-90);
+        const QRectF local = turn ? QRectF(-inner.height() / 2, -inner.width() / 2, inner.height(), inner.width())
+                                  : QRectF(-inner.width() / 2, -inner.height() / 2, inner.width(), inner.height());
         p.setFont(f);
         p.setPen(ink);
-        const double lh = QFontMetricsF(f).height();
-        if (lh * 3 <= inner.height() + 1) {
-            const double top = inner.center().y() - 1.5 * lh;
+        const QFontMetricsF fm(f);
+        const double lh = fm.height();
+        if (lh * 3 <= local.height() + 1) {
             for (int k = 0; k < 3; ++k)
-                p.drawText(QRectF(inner.left(), top + k * lh, inner.width(), lh), Qt::AlignCenter, lines[k]);
-        } else {
-            p.drawText(inner, Qt::AlignCenter, QFontMetricsF(f).elidedText(lines[0], Qt::ElideRight, inner.width()));
+                p.drawText(QRectF(local.left(), -1.5 * lh + k * lh, local.width(), lh), Qt::AlignCenter,
+                           fm.elidedText(lines[k], Qt::ElideRight, local.width()));
+        } else if (lh <= local.height() + 1) {
+            p.drawText(local, Qt::AlignCenter, fm.elidedText(lines[0], Qt::ElideRight, local.width()));
         }
-        Q_UNUSED(px);
+        p.restore();
         if (locked_.count(int(i))) {
             QFont small = font();
             small.setPixelSize(10);
