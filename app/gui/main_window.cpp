@@ -524,6 +524,16 @@ bool onlyChoicesDiffer(const Brief& a, const Brief& b) {
     return serializeProject(x) == serializeProject(y);
 }
 
+// The numbers sizing reads are the same (targets, widths, aspects, footprint, door wall).
+bool sameSizes(const Brief& a, const Brief& b) {
+    if (a.doorWidth != b.doorWidth || !(a.effectiveFootprint() == b.effectiveFootprint())) return false;
+    for (std::size_t i = 0; i < a.rooms.size() && i < b.rooms.size(); ++i)
+        if (a.rooms[i].area != b.rooms[i].area || a.rooms[i].minWidth != b.rooms[i].minWidth ||
+            a.rooms[i].maxAspect != b.rooms[i].maxAspect)
+            return false;
+    return a.rooms.size() == b.rooms.size();
+}
+
 double twoDecimals(double v) { return std::round(v * 100.0) / 100.0; }
 
 } // namespace
@@ -532,8 +542,17 @@ void MainWindow::briefChanged() {
     checkTimer_.start();
     const Brief& b = doc_->brief();
     const bool choicesOnly = haveCurrent_ && onlyChoicesDiffer(planBrief_, b);
-    if (haveCurrent_ && !currentStale_ && sameStructure(planBrief_, b)) resizeCurrent();
-    else if (haveCurrent_) currentStale_ = true;
+    if (haveCurrent_ && !currentStale_ && sameStructure(planBrief_, b)) {
+        // A moved bubble or a renamed room leaves the sizes alone.
+        if (keepLayoutOnce_ || !sameSizes(planBrief_, b)) {
+            resizeCurrent();
+        } else {
+            planBrief_ = b;
+            showCurrent(); // names and categories as typed
+        }
+    } else if (haveCurrent_) {
+        currentStale_ = true;
+    }
     keepLayoutOnce_ = false;
     if (choicesOnly) {
         planBrief_ = b;
