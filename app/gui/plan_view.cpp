@@ -193,6 +193,7 @@ void PlanView::mousePressEvent(QMouseEvent* event) {
         const QString id = roomAt(at);
         if (id.isEmpty()) return;
         dragRoom_ = brief_.roomIndex(id.toStdString());
+        if (locked_.count(dragRoom_)) return; // its size is held
         drag_ = Drag::Target;
         dragStartY_ = at.y();
         dragStartArea_ = dragArea_ = brief_.rooms[dragRoom_].area;
