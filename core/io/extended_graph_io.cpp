@@ -49,7 +49,8 @@ ExtendedGraphLoad parseExtendedGraph(const std::string& text, const std::string&
         const auto cut = what.find("] ");
         return fail("", "not valid JSON: " + (cut == std::string::npos ? what : what.substr(cut + 2)));
     }
-    if (!j.is_object() || j.value("format", "") != "abut.extended-graph")
+    if (!j.is_object() || !j.contains("format") || !j["format"].is_string() ||
+        j["format"].get<std::string>() != "abut.extended-graph")
         return fail(j.is_object() && j.contains("format") ? "/format" : "",
                     "not an extended-graph file (\"format\" must be \"abut.extended-graph\")");
     if (!j.contains("version") || !j["version"].is_number_integer() || j["version"].get<long long>() != 1)

@@ -2,6 +2,7 @@
 // is refused with its expected message, and load → save → load is stable.
 #include "io/atomic_file.h"
 #include "brief/footprint_check.h"
+#include "io/extended_graph_io.h"
 #include "io/project_io.h"
 
 #include <QDir>
@@ -48,6 +49,8 @@ private slots:
     void saveIntoMissingFolderFails();
     void unreadableFileNamed();
     void saveInterruptedAtEveryByte();
+    void invalidExtendedGraphRefused_data();
+    void invalidExtendedGraphRefused();
     void truncatedFileRefused();
     void corruptedFileRefusedOrIntact();
 };
@@ -204,6 +207,30 @@ void TestProjectIo::unreadableFileNamed() {
     const LoadResult r = loadProject("/no/such/brief.abut.json");
     QCOMPARE(r.status, LoadStatus::Unreadable);
     QVERIFY(QString::fromStdString(r.errors.front().toString()).startsWith("/no/such/brief.abut.json: cannot open"));
+}
+
+// Extended-graph files that must be refused with a located message; the
+// first was found by fuzz_extended_graph_loader (a "format" that is a number
+// threw out of the loader instead of being refused).
+void TestProjectIo::invalidExtendedGraphRefused_data() {
+    QTest::addColumn<QString>("path");
+    QTest::addColumn<QString>("expected");
+    const QDir dir(QStringLiteral(ABUT_TEST_DATA "/extended-invalid"));
+    const auto files = dir.entryInfoList({"*.ext.json"});
+    QVERIFY(!files.isEmpty());
+    for (const QFileInfo& fi : files)
+        QTest::newRow(qPrintable(fi.fileName()))
+            << fi.absoluteFilePath()
+            << QString::fromStdString(readAll(dir.filePath(fi.fileName().replace(".ext.json", ".expect")))).trimmed();
+}
+
+void TestProjectIo::invalidExtendedGraphRefused() {
+    QFETCH(QString, path);
+    QFETCH(QString, expected);
+    const ExtendedGraphLoad r = loadExtendedGraph(path.toStdString());
+    QVERIFY(!r.ok);
+    QVERIFY2(QString::fromStdString(r.error).startsWith(path), r.error.c_str());
+    QVERIFY2(QString::fromStdString(r.error).contains(expected), r.error.c_str());
 }
 
 // A project save that fails after any number of bytes (a full disk, a pulled
