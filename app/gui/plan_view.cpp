@@ -309,7 +309,6 @@ void PlanView::paintEvent(QPaintEvent*) {
                    .arg(fp_.depth, 0, 'f', 2)
                    .arg(u)
                    .arg(100.0 * v_.metrics.worstAreaError, 0, 'f', 1));
-    const double s = pixelsPerUnit();
 
     for (const Rect& r : v_.spaces) {
         p.setPen(QPen(QColor(0x77, 0x77, 0x77), 1, Qt::DashLine));
@@ -436,7 +435,6 @@ void PlanView::paintEvent(QPaintEvent*) {
         p.drawLine(h.vertical ? toScreen(h.position, h.from) : toScreen(h.from, h.position),
                    h.vertical ? toScreen(h.position, h.to) : toScreen(h.to, h.position));
     }
-    Q_UNUSED(s);
 }
 
 } // namespace abut::gui
