@@ -7,7 +7,10 @@
 
 #include <algorithm>
 #include <cmath>
+#include <iterator>
 #include <map>
+#include <optional>
+#include <random>
 #include <set>
 
 namespace abut {
@@ -104,6 +107,9 @@ private:
     CornerSearch relaxFacadeWishes(const PlaneGraph& g, const std::vector<int>& outer);
     bool smallBrief();
     void finish();
+    std::optional<ExtendedGraph> poleRoute(const PlaneGraph& rooms, unsigned seed,
+                                           std::vector<Edge>& added, int& spares) const;
+    void considerPoleRoute(const PlaneGraph& rooms, std::size_t sharedNotes);
 
     const Brief& brief_;
     AugmentOptions options_;
@@ -518,6 +524,8 @@ AugmentResult Builder::run() {
                                                  : std::vector<std::optional<SketchPoint>>{});
         reportAddedContacts(joined, "the brief has separate groups of rooms, and a plan is one piece");
     }
+    const PlaneGraph joined = g; // where the two routes part
+    const std::size_t sharedNotes = result_.diagnostics.size();
     // Shape the outline before cut vertices are closed: fewer contacts stand
     // in the way of the ones that put wishing rooms on the outline.
     bringWishingPendantsOut(g);
@@ -591,7 +599,154 @@ AugmentResult Builder::run() {
                  " spare space(s): gaps where no further wall between rooms could be added.",
              {});
     finish();
+    considerPoleRoute(joined, sharedNotes);
     return result_;
+}
+
+// The pole route (see buildExtendedGraph): rooms and the four poles embedded
+// together, the poles' cycle outside (a hub joined to the poles keeps it a
+// face), then the inside completed as in the frame route — cut vertices
+// closed, separating triangles broken (a pole–pole edge never, a wished side
+// only at a facade wish's cost), inner faces triangulated without a chord
+// between poles. Returns nothing when rooms and wished sides are not planar
+// together or the result fails its check.
+std::optional<ExtendedGraph> Builder::poleRoute(const PlaneGraph& rooms, unsigned seed,
+                                                std::vector<Edge>& added, int& spares) const {
+    bool anySided = false;
+    for (const FacadeWish& w : wishes_) anySided = anySided || w.sides;
+    if (!anySided || n_ < 3) return std::nullopt;
+    const int R = n_, hub = n_ + 4;
+    std::vector<Edge> all = rooms.edgeList();
+    for (int s = 0; s < 4; ++s) {
+        all.emplace_back(R + s, R + (s + 1) % 4);
+        all.emplace_back(R + s, hub);
+    }
+    for (int v = 0; v < R; ++v)
+        for (Side s : allSides)
+            if (wishes_[v].has(s)) all.emplace_back(v, R + static_cast<int>(s));
+    const EmbeddingResult e = embedPlanar(R + 5, all);
+    if (e.status != EmbeddingStatus::Planar) return std::nullopt;
+    // As in embedWithFacades: the hub must lie to the left of the dart N → E.
+    const bool mirrored = e.graph.nextOnFace(R, R + 1) != hub;
+    PlaneGraph g(R + 4);
+    for (int v = 0; v < R + 4; ++v) {
+        std::vector<int> rot;
+        for (int u : e.graph.neighbours(v))
+            if (u != hub) rot.push_back(u);
+        if (mirrored) std::reverse(rot.begin(), rot.end());
+        if (v >= R) { // a pole's rotation starts at the pole before it, as extendFrame writes it
+            const auto first = std::find(rot.begin(), rot.end(), R + (v - R + 3) % 4);
+            std::rotate(rot.begin(), first, rot.end());
+        }
+        g.setRotation(v, std::move(rot));
+    }
+    g.rebuildEdgeSet();
+    auto isPole = [R](int v) { return v >= R && v < R + 4; };
+    auto allowed = [&](int a, int b) { return !(isPole(a) && isPole(b)); };
+    auto edgeCost = [&](int u, int v) {
+        if (isPole(u) && isPole(v)) return 1e12;
+        if (isPole(u) || isPole(v)) {
+            const int room = std::min(u, v), side = std::max(u, v) - R;
+            return wishes_[room].has(static_cast<Side>(side)) ? 5000.0 : addedContactCost;
+        }
+        return cost(u, v);
+    };
+    const std::vector<int> outer{R, R + 1, R + 2, R + 3};
+    for (int round = 0;; ++round) {
+        for (const Edge& a : makeBiconnected(g, allowed)) added.push_back(a);
+        const std::vector<Triangle> sep = separatingTriangles(g, outer);
+        if (sep.empty()) break;
+        if (round > 4 * R) return std::nullopt;
+        for (const auto& [u, v] : cheapestCover(sep, edgeCost).edges) {
+            if (isPole(u) && isPole(v)) return std::nullopt;
+            g.removeEdge(u, v);
+        }
+    }
+    for (const std::vector<int>& f : g.faces()) {
+        std::set<int> distinct(f.begin(), f.end());
+        if (distinct.size() != f.size()) return std::nullopt; // a cut vertex stayed
+    }
+    std::mt19937 rng(seed);
+    const TriangulationReport rep = triangulateInnerFaces(g, R, R + 1, seed ? &rng : nullptr, allowed);
+    for (const Edge& a : rep.addedEdges) added.push_back(a);
+    spares = static_cast<int>(rep.spares.size());
+    ExtendedGraph x;
+    x.roomCount = R;
+    x.graph = std::move(g);
+    nameVertices(x, ids_);
+    if (!checkExtendedGraph(x).ok) return std::nullopt;
+    return x;
+}
+
+// Runs the pole route after the frame route has finished; takes it over when
+// it keeps more of the brief (fewer must adjacencies dropped and facade wishes
+// unmet), else keeps its graphs as alternatives.
+void Builder::considerPoleRoute(const PlaneGraph& rooms, std::size_t sharedNotes) {
+    if (result_.status == AugmentStatus::Internal) return;
+    std::vector<ExtendedGraph> graphs;
+    std::vector<Edge> firstAdded;
+    int firstSpares = 0;
+    for (int k = 0; k < std::max(1, options_.poleRouteGraphs); ++k) {
+        std::vector<Edge> added;
+        int spares = 0;
+        std::optional<ExtendedGraph> x = poleRoute(rooms, k == 0 ? 0u : 7919u * static_cast<unsigned>(k), added, spares);
+        if (!x) break;
+        if (k == 0) {
+            firstAdded = std::move(added);
+            firstSpares = spares;
+        }
+        graphs.push_back(std::move(*x));
+    }
+    if (graphs.empty()) return;
+    auto losses = [&](const ExtendedGraph& x, std::vector<int>* unmet) {
+        int lost = 0;
+        for (const Adjacency& a : brief_.adjacencies)
+            if (a.priority == Priority::Must && !x.graph.hasEdge(brief_.roomIndex(a.a), brief_.roomIndex(a.b)))
+                ++lost;
+        for (int v = 0; v < n_; ++v) {
+            bool met = true, any = false;
+            for (Side s : allSides) {
+                const bool touches = x.graph.hasEdge(v, x.pole(s));
+                any = any || touches;
+                if (wishes_[v].has(s)) met = met && touches;
+            }
+            if (wishes_[v].anySide) met = met && any;
+            if (!met) {
+                ++lost;
+                if (unmet) unmet->push_back(v);
+            }
+        }
+        return lost;
+    };
+    std::vector<int> unmet;
+    if (losses(graphs.front(), &unmet) >= losses(result_.extended, nullptr)) {
+        result_.alternatives = std::move(graphs);
+        return;
+    }
+    result_.diagnostics.resize(sharedNotes);
+    result_.frame = OuterFrame{};
+    result_.extended = std::move(graphs.front());
+    result_.alternatives.assign(std::make_move_iterator(graphs.begin() + 1), std::make_move_iterator(graphs.end()));
+    result_.unmetFacade = std::move(unmet);
+    result_.dropped.clear();
+    for (std::size_t i = 0; i < brief_.adjacencies.size(); ++i) {
+        const int a = brief_.roomIndex(brief_.adjacencies[i].a), b = brief_.roomIndex(brief_.adjacencies[i].b);
+        if (rooms.hasEdge(a, b) && !result_.extended.graph.hasEdge(a, b))
+            note(Severity::Warning, "dropped-adjacency",
+                 "Dropped " + describe(static_cast<int>(i)) +
+                     ": with it, some rooms would enclose others (a separating triangle).",
+                 {a, b}, {static_cast<int>(i)});
+    }
+    std::vector<Edge> contacts;
+    for (const Edge& a : firstAdded)
+        if (a.first < n_ && a.second < n_) contacts.push_back(a);
+    reportAddedContacts(contacts, "to complete the plan");
+    if (firstSpares > 0)
+        note(Severity::Info, "spare-space",
+             "The plan needs " + std::to_string(firstSpares) +
+                 " spare space(s): gaps where no further wall between rooms could be added.",
+             {});
+    finish();
 }
 
 void Builder::finish() {

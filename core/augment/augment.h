@@ -27,6 +27,7 @@ namespace abut {
 struct AugmentOptions {
     int cornerLimit = 500; // corner assignments listed per outer cycle
     int cornerChoice = 0;  // which of the ranked assignments to build (0 = best)
+    int poleRouteGraphs = 1; // graphs kept from the pole route (alternative triangulations)
 };
 
 enum class AugmentStatus {
@@ -55,8 +56,18 @@ struct AugmentResult {
     std::vector<int> unmetFacade; // rooms whose facade wish is not met
     std::vector<Diagnostic> diagnostics;
     bool embeddingFromSketch = false;
+    // Extended graphs of the other route (see buildExtendedGraph), each a
+    // valid alternative: planned beside the frame's corner assignments.
+    std::vector<ExtendedGraph> alternatives;
 };
 
+// Two routes. The frame route above works on the rooms alone and chooses the
+// outline as a cycle of rooms. The pole route puts the four sides in first,
+// each joined to the rooms that wish it, and completes the inside: it finds
+// plans where a room must appear twice on the outline (a room reaching two
+// opposite sides cuts the rest in two), which a cycle cannot describe. The
+// route that keeps more of the brief gives `extended` and the diagnostics;
+// the other one's graphs, when valid, are listed in `alternatives`.
 AugmentResult buildExtendedGraph(const Brief& brief, const AugmentOptions& options = {});
 
 // Poles and triangulation for one corner assignment of a prepared frame.

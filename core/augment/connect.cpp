@@ -100,7 +100,7 @@ std::vector<std::pair<int, int>> joinComponents(PlaneGraph& g,
     return added;
 }
 
-std::vector<std::pair<int, int>> makeBiconnected(PlaneGraph& g) {
+std::vector<std::pair<int, int>> makeBiconnected(PlaneGraph& g, const EdgeFilter& allowed) {
     std::vector<std::pair<int, int>> added;
     for (bool changed = true; changed;) {
         changed = false;
@@ -111,7 +111,7 @@ std::vector<std::pair<int, int>> makeBiconnected(PlaneGraph& g) {
                 const int c = face[i];
                 if (std::count(face.begin(), face.end(), c) < 2) continue;
                 const int a = face[(i + k - 1) % k], b = face[(i + 1) % k];
-                if (a == b || g.hasEdge(a, b)) continue;
+                if (a == b || g.hasEdge(a, b) || (allowed && !allowed(a, b))) continue;
                 const std::vector<int> common = g.commonNeighbours(a, b);
                 if (common.size() != 1 || common[0] != c) continue;
                 // Walk: ... z → a → c → b → y ...; the new edge goes into the

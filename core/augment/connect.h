@@ -12,6 +12,7 @@
 #include "brief/brief.h"
 #include "graph/plane_graph.h"
 
+#include <functional>
 #include <optional>
 #include <utility>
 #include <vector>
@@ -25,8 +26,10 @@ std::vector<std::pair<int, int>> joinComponents(PlaneGraph& g,
                                                 const std::vector<std::optional<SketchPoint>>& sketch);
 
 // Adds edges until every face is a simple cycle (the graph is 2-connected).
-// Precondition: connected, at least 3 vertices.
-std::vector<std::pair<int, int>> makeBiconnected(PlaneGraph& g);
+// Precondition: connected, at least 3 vertices. With `allowed`, only pairs
+// it accepts are joined; a cut vertex no allowed edge can close stays.
+using EdgeFilter = std::function<bool(int, int)>;
+std::vector<std::pair<int, int>> makeBiconnected(PlaneGraph& g, const EdgeFilter& allowed = {});
 
 // Component number of every vertex, and their count.
 std::pair<std::vector<int>, int> components(const PlaneGraph& g);

@@ -7,10 +7,11 @@ namespace abut {
 namespace {
 
 // Safe to add chord f[i]–f[j] inside face f?
-bool safeChord(const PlaneGraph& g, const std::vector<int>& f, int i, int j) {
+bool safeChord(const PlaneGraph& g, const std::vector<int>& f, int i, int j,
+               const std::function<bool(int, int)>& allowed) {
     const int k = static_cast<int>(f.size());
     const int u = f[i], w = f[j];
-    if (u == w || g.hasEdge(u, w)) return false;
+    if (u == w || g.hasEdge(u, w) || (allowed && !allowed(u, w))) return false;
     const int forward = (j - i + k) % k;
     for (int x : g.commonNeighbours(u, w)) {
         const bool earApex = (forward == 2 && x == f[(i + 1) % k]) ||
@@ -92,7 +93,7 @@ void addSpares(PlaneGraph& g, const std::vector<int>& f, TriangulationReport& re
 } // namespace
 
 void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationReport& report,
-                     std::mt19937* rng) {
+                     std::mt19937* rng, const std::function<bool(int, int)>& allowed) {
     std::vector<std::vector<int>> stack{face};
     while (!stack.empty()) {
         std::vector<int> f = std::move(stack.back());
@@ -102,10 +103,10 @@ void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationR
         int ci = -1, cj = -1;
         std::vector<std::pair<int, int>> safe;
         for (int i = 0; i < k && (rng || safe.empty()); ++i)
-            if (safeChord(g, f, i, (i + 2) % k)) safe.emplace_back(i, (i + 2) % k);
+            if (safeChord(g, f, i, (i + 2) % k, allowed)) safe.emplace_back(i, (i + 2) % k);
         for (int i = 0; i < k && safe.empty(); ++i)
             for (int d = 3; d <= k - 3 && safe.empty(); ++d)
-                if (safeChord(g, f, i, (i + d) % k)) safe.emplace_back(i, (i + d) % k);
+                if (safeChord(g, f, i, (i + d) % k, allowed)) safe.emplace_back(i, (i + d) % k);
         if (!safe.empty()) {
             const std::size_t pick = rng ? std::uniform_int_distribution<std::size_t>(0, safe.size() - 1)(*rng) : 0;
             ci = safe[pick].first;
@@ -132,7 +133,8 @@ void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationR
     }
 }
 
-TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int outerTo, std::mt19937* rng) {
+TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int outerTo, std::mt19937* rng,
+                                          const std::function<bool(int, int)>& allowed) {
     TriangulationReport report;
     const std::vector<int> outer = g.faceOf(outerFrom, outerTo);
     for (const std::vector<int>& f : g.faces()) {
@@ -146,7 +148,7 @@ TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int oute
                 if (r == outer) continue;
             }
         }
-        triangulateFace(g, f, report, rng);
+        triangulateFace(g, f, report, rng, allowed);
     }
     return report;
 }

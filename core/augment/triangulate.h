@@ -15,6 +15,7 @@
 
 #include "graph/plane_graph.h"
 
+#include <functional>
 #include <random>
 #include <utility>
 #include <vector>
@@ -29,11 +30,14 @@ struct TriangulationReport {
 // Triangulates the face `face`, appending to `report`. With `rng`, the safe
 // chord is drawn at random among the safe ones (ears still first), which
 // gives alternative augmentations; without, the first one is taken.
+// With `allowed`, a chord is drawn only between pairs it accepts (the poles
+// of a plan must not be joined across it).
 void triangulateFace(PlaneGraph& g, const std::vector<int>& face, TriangulationReport& report,
-                     std::mt19937* rng = nullptr);
+                     std::mt19937* rng = nullptr, const std::function<bool(int, int)>& allowed = {});
 
 // Triangulates every face except the one traced from dart outerFrom → outerTo.
 TriangulationReport triangulateInnerFaces(PlaneGraph& g, int outerFrom, int outerTo,
-                                          std::mt19937* rng = nullptr);
+                                          std::mt19937* rng = nullptr,
+                                          const std::function<bool(int, int)>& allowed = {});
 
 } // namespace abut

@@ -7,6 +7,7 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <set>
 
 namespace abut {
 
@@ -21,13 +22,14 @@ SizingProblem::SizingProblem(const Brief& brief, const ExtendedGraph& x, const R
 std::vector<double> wallMinimums(const Brief& brief, const ExtendedGraph& x, const SegmentStructure& segs,
                                  double doorWidth, double anyWall) {
     std::vector<double> out(segs.walls.size(), anyWall);
+    // Door pairs looked up once (room ids resolve by search): O(walls + adjacencies·rooms).
+    std::set<std::pair<int, int>> doors;
+    for (const Adjacency& a : brief.adjacencies)
+        if (a.kind == AdjacencyKind::Door) doors.insert(std::minmax(brief.roomIndex(a.a), brief.roomIndex(a.b)));
     for (std::size_t i = 0; i < segs.walls.size(); ++i) {
         const auto& wall = segs.walls[i];
-        if (!x.isRoom(wall.u) || !x.isRoom(wall.v)) continue;
-        for (const Adjacency& a : brief.adjacencies)
-            if (a.kind == AdjacencyKind::Door &&
-                std::minmax(brief.roomIndex(a.a), brief.roomIndex(a.b)) == std::minmax(wall.u, wall.v))
-                out[i] = std::max(out[i], doorWidth);
+        if (x.isRoom(wall.u) && x.isRoom(wall.v) && doors.count(std::minmax(wall.u, wall.v)))
+            out[i] = std::max(out[i], doorWidth);
     }
     return out;
 }
