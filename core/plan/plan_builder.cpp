@@ -246,7 +246,9 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
     };
     plan.units = brief.units;
     plan.footprint = brief.effectiveFootprint();
-    const AugmentResult aug = buildExtendedGraph(brief);
+    AugmentOptions augment;
+    augment.poleRouteGraphs = std::max(1, options.augmentations);
+    const AugmentResult aug = buildExtendedGraph(brief, augment);
     plan.diagnostics = aug.diagnostics;
     if (aug.status == AugmentStatus::Empty) {
         plan.status = PlanStatus::NoPlan;
@@ -271,6 +273,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
                 graphs.push_back(extendFrame(aug.frame, ids, aug.frame.corners[c], nullptr,
                                              a == 0 ? 0u : options.seed * 7919u + static_cast<unsigned>(a)));
     }
+    graphs.insert(graphs.end(), aug.alternatives.begin(), aug.alternatives.end());
     // Labelings of each graph, alternating between graphs so that a small
     // budget still samples every corner assignment.
     const int perGraph = std::max(1, std::min(options.labelingsPerGraph,
@@ -328,7 +331,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
     // Local search over the lattice: flip one alternating 4-cycle at a time
     // and keep the flip when the sized layout gets closer to the targets.
     const std::size_t toImprove = std::min<std::size_t>(plan.variants.size(), options.improvedCandidates);
-    const int budget = options.flipBudget > 0 ? options.flipBudget : 40 + 2 * static_cast<int>(brief.rooms.size());
+    const int budget = options.flipBudget > 0 ? options.flipBudget : 40 + 400 * static_cast<int>(brief.rooms.size());
     std::mt19937 rng(options.seed);
     for (std::size_t i = 0; i < toImprove; ++i) {
         if (!keepGoing(0.7 + 0.3 * double(i) / double(toImprove), "improving")) break;
@@ -372,30 +375,100 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
                 flip(v.extended, rel, cycles[c], *sense == Turn::Up ? Turn::Down : Turn::Up);
             }
         }
-        // Phase 2: size each flip and keep those that bring areas closer.
-        SizingResult best = SizingProblem(brief, v.extended, rel, plan.footprint, sizing).solve();
+        // Phase 2: simulated annealing over the flips (Kirkpatrick, Gelatt &
+        // Vecchi, Science 220, 1983). Hill climbing stops at the first labeling
+        // no single flip improves, and the labelings that meet the targets are
+        // few among thousands; accepting a worse neighbour now and then, less
+        // often as the temperature falls, gets past those. Each labeling is
+        // sized with a short Newton budget (enough to rank them); the best is
+        // sized in full at the end. The budget is shared by `annealRuns` runs,
+        // the first from the labeling phase 1 left, the others from a random
+        // walk away from it; each ends with a descent (every flip tried, the
+        // first that lowers the energy taken, until none does: the last
+        // annealing moves are still random at energy differences this
+        // small). Stops as soon as the targets are met.
+        SizingOptions quick = sizing;
+        quick.maxNewtonSteps = std::min(sizing.maxNewtonSteps, 20);
+        auto quickEnergy = [&](const RegularEdgeLabeling& l) {
+            return penalised(SizingProblem(brief, v.extended, l, plan.footprint, quick).solve());
+        };
+        constexpr int annealRuns = 4;
+        constexpr double metEnergy = 1e-8; // areas within about 0.01 %, nothing relaxed
+        const RegularEdgeLabeling startRel = rel;
+        const double startEnergy = quickEnergy(rel);
+        const double startTemperature = 0.3 * std::max(startEnergy, 1e-3);
+        const int runBudget = std::max(1, budget / annealRuns);
+        RegularEdgeLabeling bestRel = rel;
+        double bestEnergy = startEnergy;
+        std::uniform_int_distribution<std::size_t> pickCycle(0, cycles.empty() ? 0 : cycles.size() - 1);
+        std::uniform_real_distribution<double> unit(0.0, 1.0);
         int evaluations = 0;
-        for (bool improved = true; improved && evaluations < budget;) {
-            improved = false;
-            std::shuffle(order.begin(), order.end(), rng);
-            for (int c : order) {
-                if (evaluations >= budget ||
-                    !keepGoing(0.7 + 0.3 * (double(i) + 0.5 + 0.5 * evaluations / budget) / double(toImprove), "improving"))
-                    break;
-                const std::optional<Turn> sense = flipSense(v.extended, rel, cycles[c]);
-                if (!sense) continue;
-                RegularEdgeLabeling trial = rel;
-                flip(v.extended, trial, cycles[c], *sense);
-                const SizingResult r = SizingProblem(brief, v.extended, trial, plan.footprint, sizing).solve();
+        auto going = [&]() {
+            return evaluations % 16 != 0 ||
+                   keepGoing(0.7 + 0.3 * (double(i) + 0.5 + 0.5 * std::min(1.0, double(evaluations) / budget)) /
+                                       double(toImprove), "improving");
+        };
+        for (int run = 0; run < annealRuns && !cycles.empty() && bestEnergy > metEnergy && !stopped; ++run) {
+            RegularEdgeLabeling cur = startRel, runBest = startRel;
+            double energy = startEnergy;
+            if (run > 0) { // a fresh start: a random walk of flips away from the first one
+                for (std::size_t w = 0; w < 10 * cycles.size(); ++w) {
+                    const FourCycle& c = cycles[pickCycle(rng)];
+                    if (const std::optional<Turn> sense = flipSense(v.extended, cur, c)) flip(v.extended, cur, c, *sense);
+                }
+                energy = quickEnergy(cur);
+                runBest = cur;
                 ++evaluations;
-                if (penalised(r) < penalised(best) - 1e-12) {
-                    best = r;
-                    rel = std::move(trial);
-                    improved = true;
-                    break;
+            }
+            double runBestEnergy = energy;
+            int runEvaluations = 0;
+            for (long attempts = 0; runEvaluations < runBudget && runBestEnergy > metEnergy &&
+                                    attempts < 50L * runBudget && going();
+                 ++attempts) {
+                const FourCycle& c = cycles[pickCycle(rng)];
+                const std::optional<Turn> sense = flipSense(v.extended, cur, c);
+                if (!sense) continue;
+                RegularEdgeLabeling trial = cur;
+                flip(v.extended, trial, c, *sense);
+                const double e = quickEnergy(trial);
+                const double temperature = startTemperature * std::pow(1e-4, double(runEvaluations) / runBudget);
+                ++runEvaluations;
+                ++evaluations;
+                if (e < energy || unit(rng) < std::exp(-(e - energy) / temperature)) {
+                    cur = std::move(trial);
+                    energy = e;
+                    if (energy < runBestEnergy) {
+                        runBestEnergy = energy;
+                        runBest = cur;
+                    }
                 }
             }
+            for (bool improved = runBestEnergy > metEnergy; improved && !stopped;) {
+                improved = false;
+                std::shuffle(order.begin(), order.end(), rng);
+                for (int ci : order) {
+                    if (!going()) break;
+                    const std::optional<Turn> sense = flipSense(v.extended, runBest, cycles[ci]);
+                    if (!sense) continue;
+                    RegularEdgeLabeling trial = runBest;
+                    flip(v.extended, trial, cycles[ci], *sense);
+                    const double e = quickEnergy(trial);
+                    ++evaluations;
+                    if (e < runBestEnergy - 1e-15) {
+                        runBestEnergy = e;
+                        runBest = std::move(trial);
+                        improved = runBestEnergy > metEnergy;
+                        break;
+                    }
+                }
+            }
+            if (runBestEnergy < bestEnergy) {
+                bestEnergy = runBestEnergy;
+                bestRel = std::move(runBest);
+            }
         }
+        rel = std::move(bestRel);
+        const SizingResult best = SizingProblem(brief, v.extended, rel, plan.footprint, sizing).solve();
         PlanVariant relabelled = v;
         relabelled.labeling = rel;
         PlanVariant candidate = applySizing(brief, plan.footprint, relabelled, best);

@@ -7,6 +7,7 @@ every room on the outline wishes for the sides it touches. The tiling itself
 meets all of it, so the best variant written by `abut-cli plan` must too:
 worst area error at most 1 %, every minWidth and every door wall met, checked
 here with shapely, independently of Abut's own checks."""
+import concurrent.futures
 import json
 import os
 import random
@@ -74,9 +75,40 @@ def brief_of(rects, w, d):
             "doorWidth": DOOR, "rooms": rooms, "adjacencies": adjs}
 
 
+def check(k, n, brief, path, out):
+    """Plans one brief; returns its failures and worst area error."""
+    failures = []
+    r = subprocess.run([cli, "plan", path, "-o", out, "--variants", "1"], capture_output=True, text=True)
+    if r.returncode != 0:
+        return [f"brief {k} ({n} rooms): plan exited {r.returncode}: {r.stderr.strip()[:200]}"], 0.0
+    v = json.load(open(out))["variants"][0]
+    rects = {q["id"]: (q["x"], q["y"], q["x"] + q["width"], q["y"] + q["depth"]) for q in v["rooms"]}
+    worst = 0.0
+    for room in brief["rooms"]:
+        x0, y0, x1, y1 = rects[room["id"]]
+        err = abs((x1 - x0) * (y1 - y0) - room["area"]) / room["area"]
+        worst = max(worst, err)
+        if min(x1 - x0, y1 - y0) < room["minWidth"] - 1e-6:
+            failures.append(f"brief {k} ({n} rooms): {room['id']} narrower than its minWidth")
+    if worst > 0.01:
+        failures.append(f"brief {k} ({n} rooms): worst area error {worst:.3%}")
+    for a in brief["adjacencies"]:
+        if a["kind"] != "door":
+            continue
+        if shared(rects[a["rooms"][0]], rects[a["rooms"][1]]) < DOOR - 1e-6:
+            failures.append(f"brief {k} ({n} rooms): door wall {a['rooms']} shorter than {DOOR}")
+    return failures, worst
+
+
 rng = random.Random(60)
 failures, worst_seen = [], 0.0
-with tempfile.TemporaryDirectory() as tmp:
+# ABUT_KEEP_DIR=<folder> keeps the briefs and plans there, to look at failures.
+keep = os.environ.get("ABUT_KEEP_DIR")
+with tempfile.TemporaryDirectory() as scratch:
+    tmp = keep or scratch
+    if keep:
+        os.makedirs(keep, exist_ok=True)
+    jobs = []
     for k in range(count):
         n = rng.choice(sizes)
         w, d = rng.uniform(9, 40), rng.uniform(7, 25)
@@ -85,31 +117,19 @@ with tempfile.TemporaryDirectory() as tmp:
         w, d = w * scale, d * scale
         # Abut keeps every contact at least 5 cm long; the tilings' contacts
         # are all 15 cm or longer, so they stay achievable.
-        brief = brief_of(tiling(rng, n, w, d), w, d)
+        rects = tiling(rng, n, w, d)
+        brief = brief_of(rects, w, d)
         path = os.path.join(tmp, f"t{k}.abut.json")
-        out = os.path.join(tmp, f"t{k}.plan.json")
+        if keep:
+            json.dump({f"r{i}": r for i, r in enumerate(rects)}, open(os.path.join(tmp, f"t{k}.tiling.json"), "w"))
         json.dump(brief, open(path, "w"))
-        r = subprocess.run([cli, "plan", path, "-o", out, "--variants", "1"], capture_output=True, text=True)
-        if r.returncode != 0:
-            failures.append(f"brief {k} ({n} rooms): plan exited {r.returncode}: {r.stderr.strip()[:200]}")
-            continue
-        v = json.load(open(out))["variants"][0]
-        rects = {q["id"]: (q["x"], q["y"], q["x"] + q["width"], q["y"] + q["depth"]) for q in v["rooms"]}
-        worst = 0.0
-        for room in brief["rooms"]:
-            x0, y0, x1, y1 = rects[room["id"]]
-            err = abs((x1 - x0) * (y1 - y0) - room["area"]) / room["area"]
-            worst = max(worst, err)
-            if min(x1 - x0, y1 - y0) < room["minWidth"] - 1e-6:
-                failures.append(f"brief {k} ({n} rooms): {room['id']} narrower than its minWidth")
-        worst_seen = max(worst_seen, worst)
-        if worst > 0.01:
-            failures.append(f"brief {k} ({n} rooms): worst area error {worst:.3%}")
-        for a in brief["adjacencies"]:
-            if a["kind"] != "door":
-                continue
-            if shared(rects[a["rooms"][0]], rects[a["rooms"][1]]) < DOOR - 1e-6:
-                failures.append(f"brief {k} ({n} rooms): door wall {a['rooms']} shorter than {DOOR}")
+        jobs.append((k, n, brief, path, os.path.join(tmp, f"t{k}.plan.json")))
+    # The briefs are drawn in order above (same seed, same briefs); planning
+    # them runs on every core.
+    with concurrent.futures.ThreadPoolExecutor(max_workers=os.cpu_count() or 1) as pool:
+        for found, worst in pool.map(lambda job: check(*job), jobs):
+            failures += found
+            worst_seen = max(worst_seen, worst)
 
 for f in failures[:25]:
     print("FAIL", f)
