@@ -68,7 +68,7 @@ struct PlanOptions {
     int layoutBudget = 600;          // variants laid out at most, over all graphs
     int sizedCandidates = 30;        // best fitted variants that are then sized
     int improvedCandidates = 1;      // best sized variants then improved by labeling flips
-    int flipBudget = 0;              // sizings per improved variant (0 = 40 + 400 per room)
+    int flipBudget = 0;              // sizings per improved variant (0 = 40 + n·min(400, 8n) for n rooms)
     double grid = 0.0;               // m: planning module for walls (0 = none)
 };
 

@@ -331,7 +331,12 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
     // Local search over the lattice: flip one alternating 4-cycle at a time
     // and keep the flip when the sized layout gets closer to the targets.
     const std::size_t toImprove = std::min<std::size_t>(plan.variants.size(), options.improvedCandidates);
-    const int budget = options.flipBudget > 0 ? options.flipBudget : 40 + 400 * static_cast<int>(brief.rooms.size());
+    // The labelings that meet achievable targets were found after a number of
+    // sizings growing about with the square of the room count (random tilings
+    // of 20–100 rooms, tests/python/check_sizing.py): 8 n² up to 50 rooms,
+    // 400 n above.
+    const int rooms = static_cast<int>(brief.rooms.size());
+    const int budget = options.flipBudget > 0 ? options.flipBudget : 40 + rooms * std::min(400, 8 * rooms);
     std::mt19937 rng(options.seed);
     for (std::size_t i = 0; i < toImprove; ++i) {
         if (!keepGoing(0.7 + 0.3 * double(i) / double(toImprove), "improving")) break;

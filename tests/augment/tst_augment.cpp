@@ -55,6 +55,7 @@ private slots:
     void twoRoomsHonourFacades();
     void facadeConflictNamed();
     void pinwheel();
+    void roomAcrossTheFloor();
     void sketchEmbeddingKept();
     void shouldDroppedBeforeMust();
     void randomPlanarBriefs();
@@ -213,6 +214,29 @@ void TestAugment::pinwheel() {
         for (Side s : allSides) poles += r.extended.graph.hasEdge(v, r.extended.pole(s));
         QVERIFY(poles >= 1);
     }
+}
+
+void TestAugment::roomAcrossTheFloor() {
+    // A hall from the north facade to the south one, two rooms on each side
+    // of it (an invented three-bay house). The hall splits the others into a
+    // west and an east group, so it must appear twice on the outline: no cycle
+    // of rooms describes that, the pole route does. Every wish is kept.
+    Brief b = briefFromEdges(5, {{0, 1}, {0, 2}, {0, 3}, {0, 4}, {1, 2}, {3, 4}});
+    const std::vector<std::vector<Side>> wishes{
+        {Side::N, Side::S}, {Side::N, Side::W}, {Side::S, Side::W}, {Side::N, Side::E}, {Side::S, Side::E}};
+    for (int v = 0; v < 5; ++v)
+        for (Side s : wishes[v]) b.rooms[v].facade.add(s);
+    const AugmentResult r = buildExtendedGraph(b);
+    QCOMPARE(r.status, AugmentStatus::Feasible);
+    QVERIFY(r.dropped.empty());
+    QVERIFY(r.unmetFacade.empty());
+    QVERIFY(!hasCode(r, "facade-conflict"));
+    QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
+    for (int v = 0; v < 5; ++v)
+        for (Side s : wishes[v]) QVERIFY(r.extended.graph.hasEdge(v, r.extended.pole(s)));
+    // Nothing had to be added: the brief is already a complete plan graph.
+    QCOMPARE(r.extended.spareCount(), 0);
+    QCOMPARE(r.extended.graph.edgeCount(), 6 + 10 + 4);
 }
 
 void TestAugment::sketchEmbeddingKept() {

@@ -17,6 +17,37 @@ Brief sample(const char* name) {
 class TestPlanBuilder : public QObject {
     Q_OBJECT
 private slots:
+    void roomAcrossTheFloorSizedExactly() {
+        // A hall from north to south with two rooms on each side (the brief of
+        // tst_augment's roomAcrossTheFloor, with areas). Both long walls have
+        // the hall alone on one side, so the layout is one-sided and any
+        // areas summing to the footprint are met exactly (Eppstein, Mumford,
+        // Speckmann & Verbeek, SIAM J. Comput. 41(3), 2012): within 0.1 %.
+        Brief b;
+        const double areas[5] = {10, 12, 8, 9, 11}; // m², sum 50 = 10 m × 5 m
+        for (int v = 0; v < 5; ++v) b.rooms.push_back(Room{"r" + std::to_string(v), "", areas[v]});
+        for (auto [u, w] : std::vector<std::pair<int, int>>{{0, 1}, {0, 2}, {0, 3}, {0, 4}, {1, 2}, {3, 4}}) {
+            Adjacency a;
+            a.a = "r" + std::to_string(u);
+            a.b = "r" + std::to_string(w);
+            b.adjacencies.push_back(a);
+        }
+        const std::vector<std::vector<Side>> wishes{
+            {Side::N, Side::S}, {Side::N, Side::W}, {Side::S, Side::W}, {Side::N, Side::E}, {Side::S, Side::E}};
+        for (int v = 0; v < 5; ++v)
+            for (Side s : wishes[v]) b.rooms[v].facade.add(s);
+        b.footprint = Footprint{10.0, 5.0};
+        const Plan plan = buildPlan(b, {});
+        QCOMPARE(plan.status, PlanStatus::Ok);
+        const PlanVariant& v = plan.variants.front();
+        QVERIFY(v.unmetFacade.empty());
+        QVERIFY(v.dropped.empty());
+        QVERIFY2(v.metrics.worstAreaError <= 1e-3, std::to_string(v.metrics.worstAreaError).c_str());
+        // The hall runs the full depth.
+        QCOMPARE(v.rooms[0].y0, 0.0);
+        QVERIFY(std::abs(v.rooms[0].y1 - 5.0) < 1e-9);
+    }
+
     void progressRisesAndVariantsStream() {
         const Brief b = sample("clinic");
         std::vector<double> seen;

@@ -6,6 +6,7 @@ wish is met unless the room is listed in `unmetFacade`; variants are sorted
 best first. Briefs: the samples plus 1,000 seeded random briefs made here
 (random planar adjacency graphs, random facade wishes, door/wall and
 must/should mixes, some disconnected)."""
+import concurrent.futures
 import json
 import os
 import random
@@ -63,15 +64,29 @@ def shared_length(a, b):
     return a.buffer(TOL, join_style=2).intersection(b.boundary).length
 
 
-def check(path, brief):
-    global checked
+def plan_of(path):
+    """Runs `abut-cli plan`; returns (plan, None) or (None, what went wrong)."""
     with tempfile.TemporaryDirectory() as tmp:
         out = os.path.join(tmp, "p.plan.json")
         r = subprocess.run([cli, "plan", path, "-o", out, "--variants", "3"], capture_output=True, text=True)
         if r.returncode != 0:
-            failures.append(f"{path}: plan exited {r.returncode}: {r.stderr.strip()}")
-            return
-        plan = json.load(open(out))
+            return None, f"{path}: plan exited {r.returncode}: {r.stderr.strip()}"
+        return json.load(open(out)), None
+
+
+def check_all(jobs):
+    """Plans every (path, brief) on every core, then checks them in order."""
+    with concurrent.futures.ThreadPoolExecutor(max_workers=os.cpu_count() or 1) as pool:
+        results = list(pool.map(lambda job: plan_of(job[0]), jobs))
+    for (path, brief), (plan, error) in zip(jobs, results):
+        if error:
+            failures.append(error)
+        else:
+            check(path, brief, plan)
+
+
+def check(path, brief, plan):
+    global checked
     fw, fd = plan["footprint"]["width"], plan["footprint"]["depth"]
     footprint = box(0, 0, fw, fd)
     door = brief.get("doorWidth", 0.9)
@@ -125,10 +140,11 @@ def check(path, brief):
         checked += 1
 
 
+jobs = []
 for name in sorted(os.listdir(samples_dir)):
     if name.endswith(".abut.json"):
         p = os.path.join(samples_dir, name)
-        check(p, json.load(open(p)))
+        jobs.append((p, json.load(open(p))))
 
 rng = random.Random(7)
 with tempfile.TemporaryDirectory() as tmp:
@@ -136,7 +152,8 @@ with tempfile.TemporaryDirectory() as tmp:
         brief = random_brief(rng, rng.randint(1, 25))
         p = os.path.join(tmp, f"b{i}.abut.json")
         json.dump(brief, open(p, "w"))
-        check(p, brief)
+        jobs.append((p, brief))
+    check_all(jobs)
 
 for f in failures[:20]:
     print("FAIL", f)
