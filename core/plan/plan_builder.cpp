@@ -328,8 +328,8 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
         return a.sized != b.sized ? a.sized : a.score < b.score;
     };
     std::stable_sort(plan.variants.begin(), plan.variants.end(), sizedFirst);
-    // Local search over the lattice: flip one alternating 4-cycle at a time
-    // and keep the flip when the sized layout gets closer to the targets.
+    // Search over the lattice by flips of alternating 4-cycles: phase 1 makes
+    // the hard minimums fit, phase 2 anneals towards the targets.
     const std::size_t toImprove = std::min<std::size_t>(plan.variants.size(), options.improvedCandidates);
     // The labelings that meet achievable targets were found after a number of
     // sizings growing about with the square of the room count (random tilings
