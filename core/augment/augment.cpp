@@ -97,6 +97,7 @@ private:
     }
 
     PlaneGraph embedDroppingCrossings();
+    std::optional<PlaneGraph> embedWithPoles(const std::vector<Edge>& edges) const;
     bool embedWithFacades(const std::vector<std::pair<int, int>>& edges, PlaneGraph& out) const;
     void reportAddedContacts(const std::vector<Edge>& added, const char* why);
     std::vector<int> chooseOuterFace(const PlaneGraph& g) const;
@@ -178,36 +179,59 @@ PlaneGraph Builder::embedDroppingCrossings() {
     }
 }
 
-// A planar graph can have several embeddings; pick one that puts the rooms
-// with facade wishes around the outside, in the order of their sides: embed
-// the rooms together with four pole vertices (a cycle N–E–S–W, each joined to
-// the rooms that wish its side, and a hub joined to all four to keep them
-// outside), then drop the helpers. Returns false when that graph is not
-// planar (the wishes conflict; the plain embedding is used).
-bool Builder::embedWithFacades(const std::vector<std::pair<int, int>>& edges, PlaneGraph& out) const {
-    bool anyWish = false;
-    for (const FacadeWish& w : wishes_) anyWish = anyWish || w.sides;
-    if (!anyWish) return false;
-    const int hub = n_ + 4;
-    std::vector<std::pair<int, int>> all = edges;
+// The rooms embedded together with four pole vertices: a cycle N–E–S–W, each
+// pole joined to the rooms that wish its side, and a hub joined to all four
+// to keep them outside; the hub is then dropped, so the poles' cycle is the
+// outer face, traced N → E → S → W from the dart N → E, and each pole's
+// rotation starts at the pole before it (as extendFrame writes it). Returns
+// nothing when no room wishes a side or that graph is not planar (the wishes
+// conflict).
+std::optional<PlaneGraph> Builder::embedWithPoles(const std::vector<Edge>& edges) const {
+    bool anySided = false;
+    for (const FacadeWish& w : wishes_) anySided = anySided || w.sides;
+    if (!anySided) return std::nullopt;
+    const int R = n_, hub = n_ + 4;
+    std::vector<Edge> all = edges;
     for (int s = 0; s < 4; ++s) {
-        all.emplace_back(n_ + s, n_ + (s + 1) % 4);
-        all.emplace_back(n_ + s, hub);
+        all.emplace_back(R + s, R + (s + 1) % 4);
+        all.emplace_back(R + s, hub);
     }
-    for (int v = 0; v < n_; ++v)
+    for (int v = 0; v < R; ++v)
         for (Side s : allSides)
-            if (wishes_[v].has(s)) all.emplace_back(v, n_ + static_cast<int>(s));
-    const EmbeddingResult e = embedPlanar(n_ + 5, all);
-    if (e.status != EmbeddingStatus::Planar) return false;
+            if (wishes_[v].has(s)) all.emplace_back(v, R + static_cast<int>(s));
+    const EmbeddingResult e = embedPlanar(R + 5, all);
+    if (e.status != EmbeddingStatus::Planar) return std::nullopt;
     // Boyer–Myrvold may return the mirror image; the sides must run N, E, S,
     // W clockwise, i.e. the hub lies to the left of the dart N → E.
-    const bool mirrored = e.graph.nextOnFace(n_, n_ + 1) != hub;
+    const bool mirrored = e.graph.nextOnFace(R, R + 1) != hub;
+    PlaneGraph g(R + 4);
+    for (int v = 0; v < R + 4; ++v) {
+        std::vector<int> rot;
+        for (int u : e.graph.neighbours(v))
+            if (u != hub) rot.push_back(u);
+        if (mirrored) std::reverse(rot.begin(), rot.end());
+        if (v >= R) {
+            const auto first = std::find(rot.begin(), rot.end(), R + (v - R + 3) % 4);
+            std::rotate(rot.begin(), first, rot.end());
+        }
+        g.setRotation(v, std::move(rot));
+    }
+    g.rebuildEdgeSet();
+    return g;
+}
+
+// A planar graph can have several embeddings; pick one that puts the rooms
+// with facade wishes around the outside, in the order of their sides: the
+// embedding with the poles (above), the poles then dropped. Returns false
+// when there is none (the plain embedding is used).
+bool Builder::embedWithFacades(const std::vector<std::pair<int, int>>& edges, PlaneGraph& out) const {
+    const std::optional<PlaneGraph> withPoles = embedWithPoles(edges);
+    if (!withPoles) return false;
     out = PlaneGraph(n_);
     for (int v = 0; v < n_; ++v) {
         std::vector<int> rot;
-        for (int u : e.graph.neighbours(v))
+        for (int u : withPoles->neighbours(v))
             if (u < n_) rot.push_back(u);
-        if (mirrored) std::reverse(rot.begin(), rot.end());
         out.setRotation(v, rot);
     }
     out.rebuildEdgeSet();
@@ -612,35 +636,11 @@ AugmentResult Builder::run() {
 // together or the result fails its check.
 std::optional<ExtendedGraph> Builder::poleRoute(const PlaneGraph& rooms, unsigned seed,
                                                 std::vector<Edge>& added, int& spares) const {
-    bool anySided = false;
-    for (const FacadeWish& w : wishes_) anySided = anySided || w.sides;
-    if (!anySided || n_ < 3) return std::nullopt;
-    const int R = n_, hub = n_ + 4;
-    std::vector<Edge> all = rooms.edgeList();
-    for (int s = 0; s < 4; ++s) {
-        all.emplace_back(R + s, R + (s + 1) % 4);
-        all.emplace_back(R + s, hub);
-    }
-    for (int v = 0; v < R; ++v)
-        for (Side s : allSides)
-            if (wishes_[v].has(s)) all.emplace_back(v, R + static_cast<int>(s));
-    const EmbeddingResult e = embedPlanar(R + 5, all);
-    if (e.status != EmbeddingStatus::Planar) return std::nullopt;
-    // As in embedWithFacades: the hub must lie to the left of the dart N → E.
-    const bool mirrored = e.graph.nextOnFace(R, R + 1) != hub;
-    PlaneGraph g(R + 4);
-    for (int v = 0; v < R + 4; ++v) {
-        std::vector<int> rot;
-        for (int u : e.graph.neighbours(v))
-            if (u != hub) rot.push_back(u);
-        if (mirrored) std::reverse(rot.begin(), rot.end());
-        if (v >= R) { // a pole's rotation starts at the pole before it, as extendFrame writes it
-            const auto first = std::find(rot.begin(), rot.end(), R + (v - R + 3) % 4);
-            std::rotate(rot.begin(), first, rot.end());
-        }
-        g.setRotation(v, std::move(rot));
-    }
-    g.rebuildEdgeSet();
+    if (n_ < 3) return std::nullopt;
+    std::optional<PlaneGraph> embedded = embedWithPoles(rooms.edgeList());
+    if (!embedded) return std::nullopt;
+    PlaneGraph& g = *embedded;
+    const int R = n_;
     auto isPole = [R](int v) { return v >= R && v < R + 4; };
     auto allowed = [&](int a, int b) { return !(isPole(a) && isPole(b)); };
     auto edgeCost = [&](int u, int v) {
