@@ -100,6 +100,12 @@ private:
     std::optional<PlaneGraph> embedWithPoles(const std::vector<Edge>& edges) const;
     bool embedWithFacades(const std::vector<std::pair<int, int>>& edges, PlaneGraph& out) const;
     void reportAddedContacts(const std::vector<Edge>& added, const char* why);
+    void noteSpares(int count) {
+        note(Severity::Info, "spare-space",
+             "The plan needs " + std::to_string(count) +
+                 " spare space(s): gaps where no further wall between rooms could be added.",
+             {});
+    }
     std::vector<int> chooseOuterFace(const PlaneGraph& g) const;
     void bringWishingPendantsOut(PlaneGraph& g) const;
     bool shrinkOutlineToWishes(PlaneGraph& g, const std::vector<int>& outer);
@@ -618,10 +624,7 @@ AugmentResult Builder::run() {
     result_.extended = extendFrame(result_.frame, ids_, corners, &report);
     reportAddedContacts(report.addedEdges, "to complete the plan");
     if (!report.spares.empty())
-        note(Severity::Info, "spare-space",
-             "The plan needs " + std::to_string(report.spares.size()) +
-                 " spare space(s): gaps where no further wall between rooms could be added.",
-             {});
+        noteSpares(static_cast<int>(report.spares.size()));
     finish();
     considerPoleRoute(joined, sharedNotes);
     return result_;
@@ -742,10 +745,7 @@ void Builder::considerPoleRoute(const PlaneGraph& rooms, std::size_t sharedNotes
         if (a.first < n_ && a.second < n_) contacts.push_back(a);
     reportAddedContacts(contacts, "to complete the plan");
     if (firstSpares > 0)
-        note(Severity::Info, "spare-space",
-             "The plan needs " + std::to_string(firstSpares) +
-                 " spare space(s): gaps where no further wall between rooms could be added.",
-             {});
+        noteSpares(firstSpares);
     finish();
 }
 
