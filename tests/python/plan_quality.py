@@ -1,0 +1,78 @@
+"""Whether a plan is usable for its brief, judged with shapely alone
+(independently of Abut's own checks): the rooms and spare spaces tile the
+footprint; every room is within 5 % of its target area (a planner's usual
+band at the briefing stage: common practice, no source), at least its minimum
+width and at most its aspect limit; every 'must' adjacency is a shared wall
+(a door one at least doorWidth long); every facade wish is met."""
+from shapely.geometry import LineString, box
+from shapely.ops import unary_union
+
+AREA_BAND = 0.05
+EPS = 1e-6
+
+
+def rect_of(r):
+    return (r["x"], r["y"], r["x"] + r["width"], r["y"] + r["depth"])
+
+
+def shared(a, b):
+    """Shared wall length of two rectangles (x0, y0, x1, y1), by shapely: the
+    part of b's outline within a hair (1e-6) of a. Plan files give x and
+    width, so a wall's two sides can differ in the last bit."""
+    if box(*a).intersection(box(*b)).area > 1e-9:
+        return 0.0  # overlapping rooms share no wall (the tiling check reports them)
+    near = box(*a).buffer(1e-6, join_style=2).intersection(box(*b).boundary).length
+    return max(0.0, near - 2e-6)
+
+
+def facade_length(r, side, w, d):
+    line = {"N": LineString([(0, d), (w, d)]), "S": LineString([(0, 0), (w, 0)]),
+            "E": LineString([(w, 0), (w, d)]), "W": LineString([(0, 0), (0, d)])}[side]
+    return box(*r).buffer(1e-6, join_style=2).intersection(line).length
+
+
+def misses(brief, rooms, spaces=(), band=AREA_BAND):
+    """What the plan given as {id: (x0, y0, x1, y1)} (plus spare rectangles)
+    does not meet, as short strings; empty when usable."""
+    out = []
+    w, d = brief["footprint"]["width"], brief["footprint"]["depth"]
+    door = brief.get("doorWidth", 0.9)
+    rects = [box(*rooms[r["id"]]) for r in brief["rooms"]] + [box(*s) for s in spaces]
+    union = unary_union(rects)
+    total = sum(p.area for p in rects)
+    if abs(union.area - w * d) > 1e-4 * w * d or abs(total - w * d) > 1e-4 * w * d:
+        out.append("the rooms do not tile the footprint")
+    if not box(0, 0, w, d).buffer(1e-6).contains(union):
+        out.append("a room leaves the footprint")
+    for r in brief["rooms"]:
+        x0, y0, x1, y1 = rooms[r["id"]]
+        a = (x1 - x0) * (y1 - y0)
+        dev = (a - r["area"]) / r["area"]
+        if abs(dev) > band + 1e-9:
+            out.append(f"{r['id']}: area {a:.2f} for {r['area']:.2f} ({dev:+.1%})")
+        short, long_ = min(x1 - x0, y1 - y0), max(x1 - x0, y1 - y0)
+        if r.get("minWidth") and short < r["minWidth"] - EPS:
+            out.append(f"{r['id']}: {short:.2f} wide, minimum {r['minWidth']:.2f}")
+        if r.get("maxAspect") and short > 0 and long_ / short > r["maxAspect"] + EPS:
+            out.append(f"{r['id']}: aspect {long_ / short:.2f}, limit {r['maxAspect']}")
+        wish = r.get("facade") or []
+        sides = {s: facade_length(rooms[r["id"]], s, w, d) for s in "NESW"}
+        if "any" in wish and max(sides.values()) <= EPS:
+            out.append(f"{r['id']}: no exterior wall")
+        for s in wish:
+            if s != "any" and sides[s] <= EPS:
+                out.append(f"{r['id']}: misses the {s} facade")
+    for a in brief["adjacencies"]:
+        if a.get("priority", "must") != "must":
+            continue
+        u, v = a["rooms"]
+        length = shared(rooms[u], rooms[v])
+        need = door - EPS if a.get("kind", "door") == "door" else EPS
+        if length < need:
+            out.append(f"must {a.get('kind', 'door')} {u}-{v}: shared wall {length:.2f}")
+    return out
+
+
+def plan_rooms(variant):
+    return ({q["id"]: rect_of(q) for q in variant["rooms"]},
+            [rect_of(s) for s in variant.get("spaces", [])])
