@@ -42,11 +42,15 @@ struct Room {
     double area = 0.0;                   // target area, units²
     std::optional<double> minWidth;      // units
     std::optional<double> maxAspect;     // long side / short side, >= 1
+    std::optional<double> areaTolerance; // fraction: the band around `area` that counts as on target
     std::string category;
     FacadeWish facade;
     OrderedJson unknownFields = OrderedJson::object(); // kept for the round trip
 
     const std::string& displayName() const { return name.empty() ? id : name; }
+    // The band within which the room counts as on target (common practice at
+    // the briefing stage: ±5–10 %; no source).
+    double tolerance() const { return areaTolerance.value_or(0.05); }
 };
 
 struct Adjacency {

@@ -114,6 +114,11 @@ void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& br
     if (j.contains("maxAspect"))
         if (auto m = r.positive(j, "maxAspect", ptr + "/maxAspect", "maxAspect", 1.0))
             room.maxAspect = *m;
+    if (j.contains("areaTolerance"))
+        if (auto t = r.positive(j, "areaTolerance", ptr + "/areaTolerance", "areaTolerance", 0.0)) {
+            if (*t >= 1.0) r.error(ptr + "/areaTolerance", "areaTolerance is a fraction of the target area below 1 (0.05 = 5 %), got " + formatNumber(*t));
+            else room.areaTolerance = *t;
+        }
     if (j.contains("category"))
         if (auto c = r.string(j, "category", ptr + "/category", "category")) room.category = *c;
     if (j.contains("facade")) {
@@ -133,7 +138,7 @@ void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& br
         }
     }
     room.unknownFields =
-        unknownOf(j, {"id", "name", "area", "minWidth", "maxAspect", "category", "facade"});
+        unknownOf(j, {"id", "name", "area", "minWidth", "maxAspect", "areaTolerance", "category", "facade"});
     brief.rooms.push_back(std::move(room));
 }
 
@@ -377,6 +382,7 @@ std::string serializeProject(const Brief& brief) {
         j["area"] = room.area;
         if (room.minWidth) j["minWidth"] = *room.minWidth;
         if (room.maxAspect) j["maxAspect"] = *room.maxAspect;
+        if (room.areaTolerance) j["areaTolerance"] = *room.areaTolerance;
         if (!room.category.empty()) j["category"] = room.category;
         if (!room.facade.empty()) {
             OrderedJson f = OrderedJson::array();

@@ -50,7 +50,32 @@ std::vector<SizingProblem::Gap> SizingProblem::gaps() const {
         // A vertical wall runs north–south: its length is measured in y.
         out.push_back({!wall.vertical, wall.from, wall.to, wallMin_[i], -1});
     }
+    if (!cap_.empty())
+        for (std::size_t i = 0; i < out.size() && i < cap_.size(); ++i) out[i].min = std::min(out[i].min, cap_[i]);
     return out;
+}
+
+bool SizingProblem::meetsMinimums(const SizingResult& layout) const {
+    if (layout.x.size() != static_cast<std::size_t>(segs_.verticalCount) ||
+        layout.y.size() != static_cast<std::size_t>(segs_.horizontalCount))
+        return false;
+    for (const Gap& g : gaps()) {
+        const auto& c = g.vertical ? layout.x : layout.y;
+        if (!(c[g.to] - c[g.from] > g.min)) return false;
+    }
+    return true;
+}
+
+void SizingProblem::holdMinimumsAt(const SizingResult& layout) {
+    cap_.clear();
+    const std::vector<Gap> all = gaps();
+    cap_.assign(all.size(), std::numeric_limits<double>::infinity());
+    for (std::size_t i = 0; i < all.size(); ++i) {
+        const Gap& g = all[i];
+        const auto& c = g.vertical ? layout.x : layout.y;
+        const double extent = c[g.to] - c[g.from];
+        if (extent < g.min) cap_[i] = std::max(1e-4, 0.999 * extent);
+    }
 }
 
 namespace {
@@ -100,21 +125,49 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
         return true;
     };
     bool warm = false;
+    // Natural extent of each gap for the starting layout: a room's side of a
+    // square of its target (cold), or what `start` gives it when `start` is a
+    // layout of this problem that breaks a hard minimum (its proportions kept).
+    std::vector<double> natural(gap.size(), 0.0);
+    for (std::size_t i = 0; i < gap.size(); ++i)
+        if (gap[i].vertex >= 0 && x_.isRoom(gap[i].vertex)) natural[i] = std::sqrt(target_[gap[i].vertex]);
     if (start && start->x.size() == static_cast<std::size_t>(s.verticalCount) &&
         start->y.size() == static_cast<std::size_t>(s.horizontalCount)) {
         c.x = start->x;
         c.y = start->y;
         warm = strictlyFeasible();
+        if (!warm) {
+            for (std::size_t i = 0; i < gap.size(); ++i)
+                natural[i] = std::max(0.0, c.at(gap[i].vertical, gap[i].to) - c.at(gap[i].vertical, gap[i].from));
+            // First the nearest fix: push the two ends of each gap that is
+            // too small apart (a fixed end stays), sweep after sweep, so only
+            // what must move moves.
+            const Coordinates saved = c;
+            auto fixed = [&](bool axisX, int seg) { return (axisX ? varX[seg] : varY[seg]) < 0; };
+            for (int sweep = 0; sweep < 400 && !warm; ++sweep) {
+                for (const Gap& g : gap) {
+                    const double want = g.min * 1.001 + 1e-9 * std::max(W, D);
+                    const double deficit = want - (c.at(g.vertical, g.to) - c.at(g.vertical, g.from));
+                    if (deficit <= 0) continue;
+                    const bool fromFixed = fixed(g.vertical, g.from), toFixed = fixed(g.vertical, g.to);
+                    if (fromFixed && toFixed) continue;
+                    const double share = fromFixed || toFixed ? 1.0 : 0.5;
+                    if (!toFixed) c.at(g.vertical, g.to) += share * deficit;
+                    if (!fromFixed) c.at(g.vertical, g.from) -= share * deficit;
+                }
+                warm = strictlyFeasible();
+            }
+            if (!warm) c = saved;
+        }
     }
     if (!warm) {
-        // Cold: longest paths of minimum gaps plus a share of each room's
-        // natural size, the share as large as fits, then stretched.
+        // Longest paths of minimum gaps plus a share of each natural extent,
+        // the share as large as fits, then stretched to the footprint.
         auto layout = [&](double t, std::vector<double>& xs, std::vector<double>& ys) {
             std::vector<std::pair<std::pair<int, int>, double>> ax, ay;
-            for (const Gap& g : gap) {
-                double w = g.min * 1.01;
-                if (g.vertex >= 0 && x_.isRoom(g.vertex)) w = std::max(w, t * std::sqrt(target_[g.vertex]));
-                (g.vertical ? ax : ay).push_back({{g.from, g.to}, w});
+            for (std::size_t i = 0; i < gap.size(); ++i) {
+                const Gap& g = gap[i];
+                (g.vertical ? ax : ay).push_back({{g.from, g.to}, std::max(g.min * 1.01, t * natural[i])});
             }
             const double sx = longestSpan(s.verticalCount, ax, s.westSegment, s.eastSegment, xs);
             const double sy = longestSpan(s.horizontalCount, ay, s.southSegment, s.northSegment, ys);
@@ -168,10 +221,31 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
             const double w = c.x[s.east[v]] - c.x[s.west[v]], h = c.y[s.north[v]] - c.y[s.south[v]];
             if (x_.isRoom(v)) {
                 const double A = target_[v];
-                r.push_back(std::log(w * h / A));
-                if (withJacobian)
-                    J.push_back({{true, s.east[v], 1.0 / w}, {true, s.west[v], -1.0 / w},
-                                 {false, s.north[v], 1.0 / h}, {false, s.south[v], -1.0 / h}});
+                // The area aimed at: the preferred one when given, else the target.
+                const double aim = preferred_.empty() || preferred_[v] <= 0 ? A : preferred_[v];
+                const double e = std::log(w * h / A);
+                const std::vector<Term> de{{true, s.east[v], 1.0 / w}, {true, s.west[v], -1.0 / w},
+                                           {false, s.north[v], 1.0 / h}, {false, s.south[v], -1.0 / h}};
+                if (options_.areaBands) {
+                    // Free within the band; outside it, the distance to the band.
+                    const double tol = brief_.rooms[v].tolerance();
+                    const double up = std::log1p(tol), down = std::log1p(-std::min(tol, 0.99));
+                    const double outside = e > up ? e - up : e < down ? e - down : 0.0;
+                    r.push_back(outside);
+                    if (withJacobian) J.push_back(outside != 0.0 ? de : std::vector<Term>{});
+                    // A light pull towards the preferred area (the target
+                    // unless set) keeps the steps well posed.
+                    const double g = std::sqrt(options_.inBandWeight);
+                    r.push_back(g * std::log(w * h / aim));
+                    if (withJacobian) {
+                        std::vector<Term> scaled = de;
+                        for (Term& t : scaled) t.d *= g;
+                        J.push_back(std::move(scaled));
+                    }
+                } else {
+                    r.push_back(std::log(w * h / aim));
+                    if (withJacobian) J.push_back(de);
+                }
                 const double maxAspect = brief_.rooms[v].maxAspect.value_or(0.0);
                 if (maxAspect >= 1.0) {
                     const double g = std::sqrt(options_.aspectWeight);
@@ -189,6 +263,13 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
                                          {true, s.east[v], -g * h / (w * w)}, {true, s.west[v], g * h / (w * w)}});
                     }
                 }
+            } else if (!preferred_.empty() && preferred_[v] > 0) {
+                // A spare space meant to hold this much: log error, like a room's.
+                const double g = std::sqrt(options_.spareWeight);
+                r.push_back(g * std::log(w * h / preferred_[v]));
+                if (withJacobian)
+                    J.push_back({{true, s.east[v], g / w}, {true, s.west[v], -g / w},
+                                 {false, s.north[v], g / h}, {false, s.south[v], -g / h}});
             } else {
                 const double g = std::sqrt(options_.spareWeight) / spareScale;
                 r.push_back(g * w * h);

@@ -39,6 +39,10 @@ struct SizingOptions {
     double spareMinimum = 0.3;  // m, smallest side of a spare space
     double spareWeight = 0.05;  // β
     double aspectWeight = 0.3;  // γ
+    // Area bands (Room::tolerance): within its band a room's area costs only
+    // inBandWeight × log²(area / target); outside, the distance to the band.
+    bool areaBands = false;
+    double inBandWeight = 0.01;
     double grid = 0.0;          // m, planning module to snap segments to (0 = none)
     int maxNewtonSteps = 400;
     std::vector<int> lockedVertical, lockedHorizontal; // segment ids held where they are
@@ -85,8 +89,9 @@ public:
     SizingProblem(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,
                   const Footprint& footprint, const SizingOptions& options);
 
-    // Cold start from a stretched longest-path layout, or warm from `start`
-    // (kept where still strictly feasible).
+    // Cold start from a stretched longest-path layout, or warm from `start`:
+    // kept as it is when it is strictly feasible, else its proportions are
+    // kept in a longest-path layout that meets the hard minimums.
     SizingResult solve(const SizingResult* start = nullptr) const;
 
     // The layout, room sizes and unmet requirements of given segment
@@ -104,6 +109,17 @@ public:
     const SizingOptions& options() const { return options_; }
     void setOptions(const SizingOptions& o) { options_ = o; }
     void setTargetArea(int room, double area) { target_[room] = area; }
+    // Areas the layout should aim at, per vertex (0: none), instead of the
+    // targets (which still measure what is unmet): a room is sized towards
+    // it (with area bands: lightly, within its band); a spare space is sized
+    // towards it instead of as small as it can be.
+    void setPreferredAreas(std::vector<double> perVertex) { preferred_ = std::move(perVertex); }
+    // Whether `layout` meets every hard minimum (widths, walls) strictly.
+    bool meetsMinimums(const SizingResult& layout) const;
+    // Hard minimums (widths, walls) that `layout` does not meet are held at
+    // what it has instead: sizing then improves the areas without forcing
+    // them, and the layout's shortfalls stay (and are reported as unmet).
+    void holdMinimumsAt(const SizingResult& layout);
 
 private:
     // coordinate[to] − coordinate[from] ≥ min on one axis; `vertex` is the
@@ -118,6 +134,8 @@ private:
     Footprint footprint_;
     SizingOptions options_;
     std::vector<double> target_;
+    std::vector<double> preferred_; // per vertex, 0 = none
+    std::vector<double> cap_;       // per gap: a lower minimum held (holdMinimumsAt)
     std::vector<double> wallMin_; // per wall of segs_
 };
 
