@@ -22,8 +22,10 @@ bool parsePositive(const std::string& text, long long& value) {
 } // namespace
 
 int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostream& err) {
-    const std::string usage = "plan PROJECT -o PLAN.json [--variants K] [--strict] [--seed S]";
-    const ParsedArgs a = parseArgs(args, {"-o", "--variants", "--seed"}, {"--strict"}, err, usage);
+    const std::string usage =
+        "plan PROJECT -o PLAN.json [--variants K] [--strict] [--seed S] [--time-limit SEC] [--threads N]";
+    const ParsedArgs a =
+        parseArgs(args, {"-o", "--variants", "--seed", "--time-limit", "--threads"}, {"--strict"}, err, usage);
     if (!a.ok) return exitBadInput;
     if (a.positional.size() != 1 || !a.values.count("-o")) {
         err << "usage: abut-cli " << usage << "\n";
@@ -44,6 +46,28 @@ int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostrea
             return exitBadInput;
         }
         options.seed = static_cast<unsigned>(number);
+    }
+    if (a.values.count("--threads")) {
+        if (!parsePositive(a.values.at("--threads"), number) || number < 1 || number > 256) {
+            err << "abut-cli plan: --threads takes a whole number from 1 to 256\n";
+            return exitBadInput;
+        }
+        options.threads = static_cast<int>(number);
+    }
+    if (a.values.count("--time-limit")) {
+        const std::string& t = a.values.at("--time-limit");
+        double seconds = 0;
+        std::size_t used = 0;
+        try {
+            seconds = std::stod(t, &used);
+        } catch (...) {
+            used = 0;
+        }
+        if (used != t.size() || !(seconds > 0) || seconds > 86400) {
+            err << "abut-cli plan: --time-limit takes a number of seconds above 0 and at most 86400\n";
+            return exitBadInput;
+        }
+        options.timeLimit = seconds;
     }
     const std::string& path = a.positional[0];
     const std::string& target = a.values.at("-o");

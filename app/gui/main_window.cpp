@@ -578,10 +578,7 @@ bool MainWindow::planning() const { return runner_->busy() || planTimer_.isActiv
 void MainWindow::resizeCurrent() {
     const Brief& b = doc_->brief();
     const Footprint fp = b.effectiveFootprint();
-    SizingOptions o;
-    o.doorWidth = b.doorWidth;
-    o.anyWall = PlanOptions{}.anyWall;
-    o.spareMinimum = PlanOptions{}.spareMinimum;
+    SizingOptions o = planSizingOptions(b);
     o.lockedRooms.assign(locked_.begin(), locked_.end());
     const SizingProblem problem(b, current_.extended, current_.labeling, fp, o);
     const SizingResult start = problem.stateOf(vertexRects(current_));
@@ -663,10 +660,9 @@ void MainWindow::variantFound(const PlanVariant& v, quint64 revision) {
     if (same == variants_.end()) variants_.push_back(v);
     else if (v.score < same->score) *same = v;
     else return;
-    std::stable_sort(variants_.begin(), variants_.end(),
-                     [](const PlanVariant& a, const PlanVariant& b) { return a.score < b.score; });
-    for (std::size_t i = 0; i < variants_.size(); ++i) variants_[i].rank = int(i) + 1;
     const Brief& b = doc_->brief();
+    rankVariants(b, b.effectiveFootprint(), variants_);
+    for (std::size_t i = 0; i < variants_.size(); ++i) variants_[i].rank = int(i) + 1;
     strip_->setVariants(b, b.effectiveFootprint(), variants_);
     if (!haveCurrent_ || currentStale_) chooseVariant(QString::fromStdString(variantKey(b, variants_.front())));
     else strip_->selectKey(QString::fromStdString(variantKey(planBrief_, current_)));

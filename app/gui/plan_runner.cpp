@@ -62,7 +62,12 @@ void PlanRunner::launch() {
         };
         PlanUpdate last;
         last.final = true;
-        last.plan = buildPlan(brief, {}, &m);
+        // Lively: every core (at idle priority, inherited by the search's
+        // threads), stopped at the first plan that meets the whole brief, and
+        // never longer than 20 s; every improvement is shown as it comes.
+        PlanOptions options;
+        options.timeLimit = 20.0;
+        last.plan = buildPlan(brief, options, &m);
         promise.addResult(last);
     }));
 }

@@ -94,10 +94,7 @@ void PlanView::setLockedRooms(const std::set<int>& rooms) {
 void PlanView::rebuildProblem() {
     problem_.reset();
     if (!has_ || v_.extended.graph.vertexCount() == 0 || v_.rooms.size() != brief_.rooms.size()) return;
-    SizingOptions o;
-    o.doorWidth = brief_.doorWidth;
-    o.anyWall = PlanOptions{}.anyWall;
-    o.spareMinimum = PlanOptions{}.spareMinimum;
+    SizingOptions o = planSizingOptions(brief_);
     o.lockedRooms.assign(locked_.begin(), locked_.end());
     problem_ = std::make_unique<SizingProblem>(brief_, v_.extended, v_.labeling, fp_, o);
     state_ = problem_->stateOf(vertexRects(v_));

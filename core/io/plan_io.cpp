@@ -47,6 +47,7 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
         for (int r : v.unmetFacade) unmet.push_back(brief.rooms[r].id);
         vj["unmetFacade"] = unmet;
         vj["oneSided"] = v.oneSided;
+        vj["usable"] = v.misses.usable();
         vj["metrics"] = {{"worstAreaError", tidy(v.metrics.worstAreaError)},
                          {"meanAreaError", tidy(v.metrics.meanAreaError)},
                          {"worstAspect", tidy(v.metrics.worstAspect)},
@@ -56,6 +57,9 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
         variants.push_back(vj);
     }
     j["variants"] = variants;
+    OrderedJson search = {{"seconds", tidy(plan.stats.seconds)}, {"moves", plan.stats.moves}};
+    if (plan.stats.firstUsableSeconds >= 0) search["firstUsableSeconds"] = tidy(plan.stats.firstUsableSeconds);
+    j["search"] = search;
     return j.dump(2) + "\n";
 }
 

@@ -7,6 +7,7 @@
 #include "diagnostics.h"
 #include "dual/rectangular_dual.h"
 #include "label/regular_edge_labeling.h"
+#include "search/requirements.h"
 #include "size/segment_sizing.h"
 
 #include <string>
@@ -33,6 +34,7 @@ struct PlanVariant {
     bool oneSided = false;        // area-universal: any area targets can be met exactly
     bool sized = false;           // segment positions chosen by the sizer (not just fitted)
     std::vector<UnmetRequirement> unmet; // what the sizer could not meet, and by how much
+    RequirementMisses misses;            // what keeps it from being usable (none: usable)
     PlanMetrics metrics;
     // The combinatorial layout the rectangles come from (for sizing and dragging).
     ExtendedGraph extended;
@@ -48,6 +50,13 @@ enum class PlanStatus {
 };
 const char* toString(PlanStatus s);
 
+// How the computation went (for benchmarks and the plan file).
+struct PlanStats {
+    double firstUsableSeconds = -1; // when the first usable variant was found (−1: none)
+    double seconds = 0;             // the whole computation
+    long long moves = 0;            // plan search moves over all chains
+};
+
 struct Plan {
     PlanStatus status = PlanStatus::Ok;
     std::string summary;
@@ -55,11 +64,16 @@ struct Plan {
     Footprint footprint;
     std::vector<PlanVariant> variants; // best first
     std::vector<Diagnostic> diagnostics;
+    PlanStats stats;
 };
 
 struct PlanOptions {
     int variants = 10;               // how many to keep
     unsigned seed = 1;               // for choices that are made at random
+    int threads = 0;                 // plan search threads (0 = every core)
+    double timeLimit = 0;            // seconds (0 = none: the search's move budget ends it)
+    long long searchMoves = 0;       // plan search moves per chain (0 = from the room count)
+    int variantFlips = -1;           // labeling flips of the best plan tried as variants (−1 = 3 × variants)
     double anyWall = 0.05;           // m: shortest wall that counts as a contact (any positive length, kept visible)
     double spareMinimum = 0.3;       // m: smallest side of a spare space
     int cornerTrials = 40;           // corner assignments tried per brief
@@ -73,11 +87,15 @@ struct PlanOptions {
 };
 
 // Score of a variant (lower is better), documented for planners:
-//   worst relative area error + 0.25 × mean relative area error
-//   + 1.0 per dropped 'must' adjacency + 0.2 per dropped 'should' adjacency
-//   + 0.5 per room missing a facade it wishes for
+//   1000 per dropped 'must' adjacency (a door without a door-wide wall
+//        counts as dropped), so a plan that keeps every 'must' always ranks
+//        above one that does not
+//   + 1 per requirement missed: a room off its area band, narrower than its
+//       minimum width, more elongated than its aspect limit, or missing a
+//       facade side it wishes for
+//   + worst relative area error + 0.25 × mean relative area error
+//   + 0.2 per dropped 'should' adjacency
 //   + 0.1 × Σ (aspect − maxAspect) over rooms more elongated than allowed
-//   + 0.5 per room narrower than its minimum width
 //   + 0.2 × spare-space share of the footprint
 //   + 0.01 × interior wall length / √(footprint area)   (less wall, less cost)
 double variantScore(const Brief& brief, const Footprint& footprint, const PlanVariant& v);

@@ -2,11 +2,14 @@
 #include "plan/variant_key.h"
 
 #include "label/labeling_lattice.h"
+#include "search/plan_search.h"
 
 #include <algorithm>
 #include <set>
 #include <cmath>
 #include <numeric>
+#include <chrono>
+#include <functional>
 #include <random>
 
 namespace abut {
@@ -96,6 +99,7 @@ void updateMetrics(const Brief& brief, const Footprint& fp, const ExtendedGraph&
         if (!met) out.unmetFacade.push_back(static_cast<int>(i));
     }
     out.metrics = m;
+    out.misses = requirementMisses(brief, fp, out.rooms, PlanOptions{}.anyWall);
     out.score = variantScore(brief, fp, out);
 }
 
@@ -129,15 +133,15 @@ PlanVariant applySizing(const Brief& brief, const Footprint& fp, const PlanVaria
 
 double variantScore(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
     double score = v.metrics.worstAreaError + 0.25 * v.metrics.meanAreaError;
-    for (int d : v.dropped) score += brief.adjacencies[d].priority == Priority::Must ? 1.0 : 0.2;
-    score += 0.5 * static_cast<double>(v.unmetFacade.size());
+    for (int d : v.dropped) score += brief.adjacencies[d].priority == Priority::Must ? 1000.0 : 0.2;
+    const RequirementMisses& m = v.misses;
+    score += 1.0 * (m.area + m.minWidth + m.maxAspect + m.facade);
     for (std::size_t i = 0; i < v.rooms.size(); ++i) {
         const Rect& r = v.rooms[i];
         const double aspect = std::max(r.width(), r.depth()) / std::min(r.width(), r.depth());
         if (brief.rooms[i].maxAspect && aspect > *brief.rooms[i].maxAspect)
             score += 0.1 * (aspect - *brief.rooms[i].maxAspect);
     }
-    score += 0.5 * v.metrics.narrowRooms;
     const double area = fp.width * fp.depth;
     score += 0.2 * v.metrics.spareArea / area;
     double walls = 0;
@@ -236,30 +240,17 @@ std::string checkVariant(const Brief& brief, const Footprint& fp, const PlanVari
     return {};
 }
 
-Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor* monitor) {
-    Plan plan;
+namespace {
+
+// Today's pipeline before the plan search, kept as a further seed: the
+// augmentation's extended graphs (corner assignments, triangulations, the
+// pole route), a few labelings of each, fitted; the best sized; the best of
+// those improved by labeling flips (`anneal`). Adds to plan.variants.
+// Returns false on an internal error (plan.status and summary set).
+bool legacyVariants(const Brief& brief, const AugmentResult& aug, const PlanOptions& options, Plan& plan,
+                    const std::function<bool(double, const char*)>& keepGoing, bool anneal,
+                    const PlanMonitor* monitor) {
     bool stopped = false;
-    // Progress: labelings 0–0.3, sizing 0.3–0.7, improving 0.7–1.
-    auto keepGoing = [&](double done, const char* step) {
-        if (!stopped && monitor && monitor->progress && !monitor->progress(done, step)) stopped = true;
-        return !stopped;
-    };
-    plan.units = brief.units;
-    plan.footprint = brief.effectiveFootprint();
-    AugmentOptions augment;
-    augment.poleRouteGraphs = std::max(1, options.augmentations);
-    const AugmentResult aug = buildExtendedGraph(brief, augment);
-    plan.diagnostics = aug.diagnostics;
-    if (aug.status == AugmentStatus::Empty) {
-        plan.status = PlanStatus::NoPlan;
-        plan.summary = aug.summary;
-        return plan;
-    }
-    if (aug.status == AugmentStatus::Internal) {
-        plan.status = PlanStatus::Internal;
-        plan.summary = aug.summary;
-        return plan;
-    }
     // Variants: the extended graphs of the best-ranked corner assignments.
     std::vector<ExtendedGraph> graphs;
     if (aug.frame.corners.empty()) {
@@ -274,12 +265,16 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
                                              a == 0 ? 0u : options.seed * 7919u + static_cast<unsigned>(a)));
     }
     graphs.insert(graphs.end(), aug.alternatives.begin(), aug.alternatives.end());
+    std::vector<PlanVariant> variants;
     // Labelings of each graph, alternating between graphs so that a small
     // budget still samples every corner assignment.
     const int perGraph = std::max(1, std::min(options.labelingsPerGraph,
                                               options.layoutBudget / static_cast<int>(graphs.size())));
     for (std::size_t g = 0; g < graphs.size(); ++g) {
-        if (!keepGoing(0.3 * double(g) / double(graphs.size()), "arrangements")) break;
+        if (!keepGoing(0.3 * double(g) / double(graphs.size()), "arrangements")) {
+            stopped = true;
+            break;
+        }
         const ExtendedGraph& x = graphs[g];
         const LabelingResult r = computeRegularEdgeLabeling(x);
         const LabelingCheck c = r.status == LabelingStatus::Ok ? checkRegularEdgeLabeling(x, r.labeling)
@@ -287,7 +282,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
         if (!c.ok) {
             plan.status = PlanStatus::Internal;
             plan.summary = "Internal error: no regular edge labeling (" + c.problem + "). Please report this brief.";
-            return plan;
+            return false;
         }
         LabelingEnumerator labelings(x, r.labeling, options.seed);
         for (int k = 0; k < perGraph; ++k) {
@@ -298,39 +293,37 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
             if (!problem.empty()) {
                 plan.status = PlanStatus::Internal;
                 plan.summary = "Internal error: the plan failed its check (" + problem + "). Please report this brief.";
-                return plan;
+                return false;
             }
             v.oneSided = isOneSided(x, *rel);
-            plan.variants.push_back(std::move(v));
+            variants.push_back(std::move(v));
         }
     }
     auto byScore = [](const PlanVariant& a, const PlanVariant& b) { return a.score < b.score; };
-    std::stable_sort(plan.variants.begin(), plan.variants.end(), byScore);
-    // Size the most promising fitted variants to their target areas.
-    SizingOptions sizing;
-    sizing.doorWidth = brief.doorWidth;
-    sizing.anyWall = options.anyWall;
-    sizing.spareMinimum = options.spareMinimum;
-    sizing.grid = options.grid;
-    const std::size_t toSize = std::min<std::size_t>(plan.variants.size(), options.sizedCandidates);
-    for (std::size_t i = 0; i < toSize; ++i) {
-        if (!keepGoing(0.3 + 0.4 * double(i) / double(toSize), "sizing")) break;
-        PlanVariant& v = plan.variants[i];
+    std::stable_sort(variants.begin(), variants.end(), byScore);
+    // Size the most promising fitted variants to their target areas (exactly:
+    // this route is for briefs whose targets can be met exactly).
+    SizingOptions sizing = planSizingOptions(brief, options);
+    sizing.areaBands = false;
+    const std::size_t toSize = std::min<std::size_t>(variants.size(), options.sizedCandidates);
+    for (std::size_t i = 0; i < toSize && !stopped; ++i) {
+        if (!keepGoing(0.3 + 0.4 * double(i) / double(toSize), "sizing")) {
+            stopped = true;
+            break;
+        }
+        PlanVariant& v = variants[i];
         const SizingProblem problem(brief, v.extended, v.labeling, plan.footprint, sizing);
         PlanVariant candidate = applySizing(brief, plan.footprint, v, problem.solve());
         if (!checkVariant(brief, plan.footprint, candidate).empty()) continue; // keep the fitted one
         v = std::move(candidate);
-        if (monitor && monitor->found) monitor->found(v);
     }
     // A sized variant has its unmet requirements worked out; a merely fitted
     // one does not, so it must never be offered ahead of a sized one.
     auto sizedFirst = [](const PlanVariant& a, const PlanVariant& b) {
         return a.sized != b.sized ? a.sized : a.score < b.score;
     };
-    std::stable_sort(plan.variants.begin(), plan.variants.end(), sizedFirst);
-    // Search over the lattice by flips of alternating 4-cycles: phase 1 makes
-    // the hard minimums fit, phase 2 anneals towards the targets.
-    const std::size_t toImprove = std::min<std::size_t>(plan.variants.size(), options.improvedCandidates);
+    std::stable_sort(variants.begin(), variants.end(), sizedFirst);
+    const std::size_t toImprove = anneal ? std::min<std::size_t>(variants.size(), options.improvedCandidates) : 0;
     // The labelings that meet achievable targets were found after a number of
     // sizings growing about with the square of the room count (random tilings
     // of 20–100 rooms, tests/python/check_sizing.py): 8 n² up to 50 rooms,
@@ -339,8 +332,11 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
     const int budget = options.flipBudget > 0 ? options.flipBudget : 40 + rooms * std::min(400, 8 * rooms);
     std::mt19937 rng(options.seed);
     for (std::size_t i = 0; i < toImprove; ++i) {
-        if (!keepGoing(0.7 + 0.3 * double(i) / double(toImprove), "improving")) break;
-        PlanVariant& v = plan.variants[i];
+        if (!keepGoing(0.7 + 0.3 * double(i) / double(toImprove), "improving")) {
+            stopped = true;
+            break;
+        }
+        PlanVariant& v = variants[i];
         if (!v.sized) continue;
         const std::vector<FourCycle> cycles = fourCycles(v.extended);
         auto penalised = [](const SizingResult& r) {
@@ -483,12 +479,140 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
             if (monitor && monitor->found) monitor->found(v);
         }
     }
-    std::stable_sort(plan.variants.begin(), plan.variants.end(), sizedFirst);
+    for (PlanVariant& v : variants) plan.variants.push_back(std::move(v));
+    return true;
+}
+
+// A sized plan found by the search, as a variant.
+PlanVariant variantOf(const Brief& brief, const Footprint& fp, const SearchPlan& found) {
+    PlanVariant v;
+    v.extended = found.extended;
+    v.labeling = found.labeling;
+    v = applySizing(brief, fp, v, found.sized);
+    v.oneSided = isOneSided(v.extended, v.labeling);
+    return v;
+}
+
+// Streams the search's progress and improvements to a PlanMonitor.
+class MonitorVisitor : public SearchVisitor {
+public:
+    MonitorVisitor(const Brief& brief, const Footprint& fp, const PlanMonitor* monitor, double from, double to)
+        : brief_(brief), fp_(fp), monitor_(monitor), from_(from), to_(to) {}
+    bool onRound(const SearchProgress& p) override {
+        if (!monitor_ || !monitor_->progress) return true;
+        stopped_ = !monitor_->progress(from_ + (to_ - from_) * p.done, p.usable ? "improving" : "searching");
+        return !stopped_;
+    }
+    void onImproved(const SearchPlan& plan) override {
+        if (monitor_ && monitor_->found) monitor_->found(variantOf(brief_, fp_, plan));
+    }
+    bool stopped() const { return stopped_; }
+
+private:
+    const Brief& brief_;
+    const Footprint& fp_;
+    const PlanMonitor* monitor_;
+    double from_, to_;
+    bool stopped_ = false;
+};
+
+} // namespace
+
+SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options) {
+    SizingOptions s;
+    s.doorWidth = brief.doorWidth;
+    s.anyWall = options.anyWall;
+    s.spareMinimum = options.spareMinimum;
+    s.grid = options.grid;
+    s.areaBands = true;
+    return s;
+}
+
+Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor* monitor) {
+    Plan plan;
+    const auto started = std::chrono::steady_clock::now();
+    auto elapsed = [&] { return std::chrono::duration<double>(std::chrono::steady_clock::now() - started).count(); };
+    bool stopped = false;
+    auto keepGoing = [&](double done, const char* step) {
+        if (!stopped && monitor && monitor->progress && !monitor->progress(done, step)) stopped = true;
+        if (options.timeLimit > 0 && elapsed() > options.timeLimit) stopped = true;
+        return !stopped;
+    };
+    plan.units = brief.units;
+    plan.footprint = brief.effectiveFootprint();
+    AugmentOptions augment;
+    augment.poleRouteGraphs = std::max(1, options.augmentations);
+    const AugmentResult aug = buildExtendedGraph(brief, augment);
+    plan.diagnostics = aug.diagnostics;
+    if (aug.status == AugmentStatus::Empty) {
+        plan.status = PlanStatus::NoPlan;
+        plan.summary = aug.summary;
+        return plan;
+    }
+    if (aug.status == AugmentStatus::Internal) {
+        plan.status = PlanStatus::Internal;
+        plan.summary = aug.summary;
+        return plan;
+    }
+    // When the brief names most contacts ('must' adjacencies ≥ 1.6 per room,
+    // as in a brief read off a drawn plan), its graph nearly is the extended
+    // graph: the graph-first pipeline goes straight to it and comes first.
+    // Otherwise the plan search leads and that pipeline is the fallback.
+    int musts = 0;
+    for (const Adjacency& a : brief.adjacencies) musts += a.priority == Priority::Must;
+    const bool dense = brief.rooms.size() >= 4 && musts >= 1.6 * static_cast<double>(brief.rooms.size());
+    auto anyUsable = [&] {
+        for (const PlanVariant& v : plan.variants)
+            if (v.sized && v.misses.usable()) return true;
+        return false;
+    };
+    auto runLegacy = [&](bool anneal, double from, double to) {
+        auto going = [&](double done, const char* step) { return keepGoing(from + (to - from) * done, step); };
+        return legacyVariants(brief, aug, options, plan, going, anneal && options.improvedCandidates > 0, monitor);
+    };
+    if (dense) {
+        if (!runLegacy(true, 0.0, 0.5)) return plan;
+        if (anyUsable()) plan.stats.firstUsableSeconds = elapsed();
+    }
+    if (!anyUsable() && !stopped && (options.timeLimit <= 0 || elapsed() < options.timeLimit)) {
+        // The plan search: whole plans, arranged and sized together.
+        SearchOptions search;
+        search.seed = options.seed;
+        search.threads = options.threads;
+        search.timeLimit = options.timeLimit > 0 ? options.timeLimit - elapsed() : 0;
+        search.moves = options.searchMoves;
+        search.variantFlips = options.variantFlips;
+        search.keep = std::max(1, options.variants);
+        search.anyWall = options.anyWall;
+        search.spareMinimum = options.spareMinimum;
+        search.grid = options.grid;
+        const double from = dense ? 0.5 : 0.0;
+        MonitorVisitor visitor(brief, plan.footprint, monitor, from, dense ? 1.0 : 0.85);
+        const SearchResult found = searchPlans(brief, search, &visitor);
+        stopped = visitor.stopped();
+        if (found.firstUsableSeconds >= 0) plan.stats.firstUsableSeconds = elapsed() - found.seconds + found.firstUsableSeconds;
+        plan.stats.moves = found.moves;
+        for (const SearchPlan& sp : found.plans) {
+            PlanVariant v = variantOf(brief, plan.footprint, sp);
+            const std::string problem = checkVariant(brief, plan.footprint, v);
+            if (!problem.empty()) {
+                plan.status = PlanStatus::Internal;
+                plan.summary = "Internal error: a searched plan failed its check (" + problem + "). Please report this brief.";
+                return plan;
+            }
+            plan.variants.push_back(std::move(v));
+        }
+        // The graph-first pipeline as a fallback.
+        if (!dense && found.status != SearchStatus::Usable && !stopped &&
+            (options.timeLimit <= 0 || elapsed() < options.timeLimit))
+            if (!runLegacy(true, 0.85, 1.0)) return plan;
+    }
     if (plan.variants.empty()) { // stopped before the first layout
         plan.status = stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
         plan.summary = stopped ? "Stopped before any variant was found." : aug.summary;
         return plan;
     }
+    rankVariants(brief, plan.footprint, plan.variants);
     // One variant per arrangement of rooms (the same arrangement is reached
     // from graphs that differ only by an added contact, or sized twice), the
     // better ranked kept: the planner compares arrangements, not sizings.
@@ -510,8 +634,20 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
                                     {}, {}});
     plan.status = stopped ? PlanStatus::Cancelled : mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
     plan.summary = stopped ? "Stopped: " + std::to_string(plan.variants.size()) + " variant(s) found so far." : aug.summary;
+    plan.stats.seconds = elapsed();
     if (!stopped) keepGoing(1.0, "done");
     return plan;
+}
+
+void rankVariants(const Brief& brief, const Footprint& fp, std::vector<PlanVariant>& variants) {
+    (void)brief;
+    (void)fp;
+    // A sized variant has its unmet requirements worked out; a merely fitted
+    // one does not, so it never comes first. Then the score, which puts any
+    // plan that keeps every 'must' ahead of one that does not.
+    std::stable_sort(variants.begin(), variants.end(), [](const PlanVariant& a, const PlanVariant& b) {
+        return a.sized != b.sized ? a.sized : a.score < b.score;
+    });
 }
 
 } // namespace abut

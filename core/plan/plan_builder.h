@@ -31,6 +31,12 @@ struct PlanMonitor {
 
 Plan buildPlan(const Brief& brief, const PlanOptions& options = {}, const PlanMonitor* monitor = nullptr);
 
+// The sizing options every plan of the brief is sized with (area bands free).
+SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options = {});
+
+// Best first: sized before fitted, then by score (variantScore).
+void rankVariants(const Brief& brief, const Footprint& footprint, std::vector<PlanVariant>& variants);
+
 // One variant from a given extended graph and labeling. Its dropped
 // adjacencies are those `x` does not join, plus doors left too short.
 PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,

@@ -274,9 +274,10 @@ std::vector<Point> roughPositions(const Problem& p, const Brief& brief, bool use
             for (int i = 0; i < B; ++i)
                 for (int j = i + 1; j < B; ++j) {
                     const double dx = pos[j].x - pos[i].x, dy = pos[j].y - pos[i].y;
-                    const double dist = std::max(1e-9, std::hypot(dx, dy));
-                    const double overlap = radius[i] + radius[j] - dist;
-                    if (overlap <= 0) continue;
+                    const double reach = radius[i] + radius[j];
+                    if (dx * dx + dy * dy >= reach * reach) continue; // apart: no push
+                    const double dist = std::max(1e-9, std::sqrt(dx * dx + dy * dy));
+                    const double overlap = reach - dist;
                     const double k = 0.25 * overlap / dist;
                     f[i].x -= k * dx, f[i].y -= k * dy;
                     f[j].x += k * dx, f[j].y += k * dy;
@@ -891,33 +892,49 @@ bool ranksBefore(const SearchPlan& a, const SearchPlan& b) {
     return a.cost < b.cost;
 }
 
-// A plan's arrangement sized towards the areas the search lays out (the
-// targets; within their bands when the footprint has room to spare), warm
-// from `rects` (per vertex of its extended graph). With `held`, also sized
-// with the shortfalls of `rects` held (SizingProblem::holdMinimumsAt) when
-// it has any.
-void sizeArrangement(const Brief& brief, const Footprint& fp, const SearchOptions& o, const std::vector<Rect>& rects,
-                     SearchPlan& plan, std::optional<SearchPlan>* held) {
+// The ways a plan's arrangement (extended graph and labeling set) is sized,
+// warm from `rects` (per vertex): towards the areas the search lays out (the
+// targets; within their bands when the footprint has room to spare); when
+// that leaves a room off its band, with the bands free; when `rects` falls
+// short of a hard minimum, also with its shortfalls held
+// (SizingProblem::holdMinimumsAt). The caller judges which is best.
+std::vector<SearchPlan> sizeArrangement(const Brief& brief, const Footprint& fp, const SearchOptions& o,
+                                        const std::vector<Rect>& rects, const SearchPlan& arrangement) {
+    std::vector<SearchPlan> out;
     SizingOptions so;
     so.doorWidth = brief.doorWidth;
     so.anyWall = o.anyWall;
     so.spareMinimum = o.spareMinimum;
     so.grid = o.grid;
-    SizingProblem problem(brief, plan.extended, plan.labeling, fp, so);
-    problem.setPreferredAreas(preferredAreas(brief, fp, plan.extended));
+    SizingProblem problem(brief, arrangement.extended, arrangement.labeling, fp, so);
+    problem.setPreferredAreas(preferredAreas(brief, fp, arrangement.extended));
     const SizingResult start = problem.stateOf(rects);
+    auto add = [&](SizingResult sized) {
+        out.push_back(arrangement);
+        out.back().sized = std::move(sized);
+    };
     if (problem.meetsMinimums(start)) { // nothing has to move
-        plan.sized = start;
-        return;
+        add(start);
+        return out;
     }
-    plan.sized = problem.solve(&start);
+    add(problem.solve(&start));
+    bool offBand = false;
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i)
+        offBand = offBand || std::abs(out.back().sized.rooms[i].deviation) > brief.rooms[i].tolerance();
+    if (offBand) {
+        SizingOptions banded = so;
+        banded.areaBands = true;
+        problem.setOptions(banded);
+        add(problem.solve(&start));
+        problem.setOptions(so);
+    }
     bool shortfall = false;
     for (const UnmetRequirement& u : start.unmet) shortfall = shortfall || u.kind == "minWidth" || u.kind == "doorWall";
-    if (held && shortfall) {
-        *held = plan;
+    if (shortfall) {
         problem.holdMinimumsAt(start);
-        (*held)->sized = problem.solve(&start);
+        add(problem.solve(&start));
     }
+    return out;
 }
 
 // Misses and cost of a sized plan.
@@ -938,6 +955,16 @@ void judge(const Brief& brief, const Problem& p, const SearchOptions& o, SearchP
     for (int i = 0; i < p.rooms; ++i)
         err += std::abs(rooms[i].area() - brief.rooms[i].area) / brief.rooms[i].area;
     plan.cost += 0.1 * plan.misses.worstAreaError + 0.02 * err / std::max(1, p.rooms);
+}
+
+// The best of several sizings of one arrangement, judged.
+SearchPlan pickSizing(const Brief& brief, const Problem& p, const SearchOptions& o, std::vector<SearchPlan> sizings) {
+    std::size_t best = 0;
+    for (std::size_t k = 0; k < sizings.size(); ++k) {
+        judge(brief, p, o, sizings[k]);
+        if (ranksBefore(sizings[k], sizings[best])) best = k;
+    }
+    return std::move(sizings[best]);
 }
 
 class Pool {
@@ -999,13 +1026,11 @@ SizedTiling sizeTiling(const Brief& brief, const Footprint& fp, const std::vecto
         out.problem = dual.problem;
         return out;
     }
-    SearchPlan& plan = out.plan;
-    plan.extended = std::move(dual.extended);
-    plan.labeling = std::move(dual.labeling);
-    plan.key = arrangementKey(plan.extended, plan.labeling);
-    // Sized twice when the tiling misses a hard minimum: with every minimum
-    // enforced (which may cost areas), and with the tiling's shortfalls held.
-    sizeArrangement(brief, fp, options, dual.rects, plan, &out.held);
+    SearchPlan arrangement;
+    arrangement.extended = std::move(dual.extended);
+    arrangement.labeling = std::move(dual.labeling);
+    arrangement.key = arrangementKey(arrangement.extended, arrangement.labeling);
+    out.sizings = sizeArrangement(brief, fp, options, dual.rects, arrangement);
     out.ok = true;
     return out;
 }
@@ -1036,14 +1061,10 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
     auto consider = [&](const std::vector<Rect>& rects) {
         SizedTiling s = sizeTiling(brief, fp, rects, options);
         if (!s.ok) return;
-        judge(brief, p, options, s.plan);
-        if (s.held) {
-            judge(brief, p, options, *s.held);
-            if (ranksBefore(*s.held, s.plan)) s.plan = std::move(*s.held);
-        }
+        SearchPlan best = pickSizing(brief, p, options, std::move(s.sizings));
         const bool wasUsable = found.usable();
-        const std::string key = s.plan.key;
-        if (found.offer(std::move(s.plan))) {
+        const std::string key = best.key;
+        if (found.offer(std::move(best))) {
             // On top: a better plan than any before.
             if (visitor && found.plans().front().key == key) visitor->onImproved(found.plans().front());
             if (!wasUsable && found.usable()) result.firstUsableSeconds = elapsed();
@@ -1084,8 +1105,6 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
             if (++roundsAfterUsable > 3 || static_cast<int>(found.plans().size()) >= options.keep) break;
         }
     }
-    if (result.moves > 0)
-        for (auto& c : chains) consider(c->bestRects());
 
     // Variants: labelings one flip away from the best plan's (the same rooms
     // meet, walls slide past each other differently).
@@ -1093,9 +1112,10 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
         const SearchPlan best = found.plans().front();
         const std::vector<FourCycle> cycles = fourCycles(best.extended);
         const double flipDeadline = options.timeLimit > 0 ? std::max(elapsed(), options.timeLimit) : 1e300;
+        const int flips = options.variantFlips >= 0 ? options.variantFlips : 3 * options.keep;
         int tried = 0;
         for (const FourCycle& c : cycles) {
-            if (tried >= 3 * options.keep || elapsed() > flipDeadline) break;
+            if (tried >= flips || elapsed() > flipDeadline) break;
             const std::optional<Turn> sense = flipSense(best.extended, best.labeling, c);
             if (!sense) continue;
             ++tried;
@@ -1103,11 +1123,9 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
             q.extended = best.extended;
             q.labeling = best.labeling;
             flip(q.extended, q.labeling, c, *sense);
-            // Warm from the best plan's rectangles: their proportions are kept.
-            sizeArrangement(brief, fp, options, best.sized.rects, q, nullptr);
             q.key = arrangementKey(q.extended, q.labeling);
-            judge(brief, p, options, q);
-            found.offer(std::move(q));
+            // Warm from the best plan's rectangles: their proportions are kept.
+            found.offer(pickSizing(brief, p, options, sizeArrangement(brief, fp, options, best.sized.rects, q)));
         }
     }
 

@@ -35,7 +35,6 @@
 #include "search/requirements.h"
 #include "size/segment_sizing.h"
 
-#include <optional>
 #include <string>
 #include <vector>
 
@@ -51,6 +50,7 @@ struct SearchOptions {
     double spareMinimum = 0.3;  // m: smallest side of a spare space
     double grid = 0;            // m: planning module for walls (0 = none)
     bool stopWhenUsable = true; // stop at the first plan that meets the whole brief
+    int variantFlips = -1;      // labeling flips of the best plan sized as variants (−1 = 3 × keep)
 };
 
 // One arrangement found, sized.
@@ -103,14 +103,16 @@ std::vector<double> preferredAreas(const Brief& brief, const Footprint& footprin
 
 SearchResult searchPlans(const Brief& brief, const SearchOptions& options = {}, SearchVisitor* visitor = nullptr);
 
-// Turns a tiling (room rectangles in brief order, then spare spaces) into a
-// sized plan: its extended graph and labeling (checked), sized with the area
-// bands free, warm from the tiling. `ok` false when the tiling is not one.
+// Turns a tiling (room rectangles in brief order, then spare spaces) into
+// sized plans: its extended graph and labeling (checked), sized warm from the
+// tiling in one or more ways — towards the targets with every hard minimum
+// enforced; with the area bands free when that leaves a room off its band;
+// with the tiling's own shortfalls held when it has some. `ok` false when the
+// tiling is not one.
 struct SizedTiling {
     bool ok = false;
     std::string problem;
-    SearchPlan plan;                 // every hard minimum enforced
-    std::optional<SearchPlan> held;  // the tiling's shortfalls held instead (when it has some)
+    std::vector<SearchPlan> sizings; // misses and cost not yet judged
 };
 SizedTiling sizeTiling(const Brief& brief, const Footprint& footprint, const std::vector<Rect>& tiles,
                        const SearchOptions& options);

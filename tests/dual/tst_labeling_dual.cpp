@@ -74,6 +74,9 @@ void TestLabelingDual::randomBriefs() {
 void TestLabelingDual::pinwheelPlan() {
     // The five-room pinwheel: four rooms around a centre, each touching the next.
     Brief b = abut::testing::briefFromEdges(5, {{0, 1}, {0, 2}, {0, 3}, {0, 4}, {1, 2}, {2, 3}, {3, 4}, {4, 1}});
+    // Targets that fill the footprint: footprint area the targets leave over
+    // would stand as a spare space (the default `surplus: "spare"`).
+    for (Room& r : b.rooms) r.area = 20.0;
     b.footprint = Footprint{10.0, 10.0};
     const Plan plan = buildPlan(b);
     QCOMPARE(plan.status, PlanStatus::Ok);

@@ -62,6 +62,9 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     light.labelingsPerGraph = 3;
     light.sizedCandidates = 1;
     light.improvedCandidates = 0;
+    light.searchMoves = 2000; // a short plan search: every variant is still checked
+    light.threads = 1;
+    light.variantFlips = 0;
     const abut::Plan plan = abut::buildPlan(b, light);
     if (plan.status == abut::PlanStatus::Internal || plan.variants.empty()) std::abort();
     for (const abut::PlanVariant& v : plan.variants) {

@@ -114,6 +114,9 @@ private slots:
         light.labelingsPerGraph = 2;
         light.sizedCandidates = 1;
         light.improvedCandidates = 0;
+        light.searchMoves = 2000; // a short plan search: every variant is still checked
+        light.threads = 1;
+        light.variantFlips = 0;
         std::mt19937 rng(seed);
         Mix mix;
         int withPlan = 0, withoutPlan = 0, variantsChecked = 0;

@@ -452,15 +452,17 @@ def brief_of(g, rng, sketch):
     return brief
 
 
-def make(rng, kind=None, n=None):
+def make(rng, kind=None, n=None, limit=60):
+    """A brief of plan type `kind` with about n rooms (8 to `limit`; houses
+    and pinwheel houses stay small)."""
     kind = kind or rng.choice(TYPES)
-    n = n or rng.randint(8, 60)
+    n = n or rng.randint(8, limit)
     lo = {"house": 9, "pinwheel": 6}.get(kind, 8)
-    hi = {"house": 14, "pinwheel": 20}.get(kind, 60)
+    hi = {"house": 14, "pinwheel": 20}.get(kind, limit)
     n = max(lo, min(hi, n))
-    while True:  # the makers land near n rooms; keep to 8–60
+    while True:  # the makers land near n rooms; keep to 8–limit
         g = MAKERS[kind](rng, n)
-        if 8 <= len(g.rooms) <= 60:
+        if 8 <= len(g.rooms) <= limit:
             break
         n += 1 if len(g.rooms) < 8 else -2
     transform(g, rng)
@@ -469,14 +471,15 @@ def make(rng, kind=None, n=None):
     return kind, brief, witness
 
 
-def generate(count, seed, sizes=None):
+def generate(count, seed, sizes=None, types=None, limit=60):
     """`count` briefs in a fixed order for a seed: (kind, brief, witness)."""
     rng = random.Random(seed)
+    types = types or TYPES
     out = []
     for k in range(count):
-        kind = TYPES[k % len(TYPES)]
-        n = rng.choice(sizes) if sizes else rng.randint(8, 60)
-        out.append(make(rng, kind, n))
+        kind = types[k % len(types)]
+        n = rng.choice(sizes) if sizes else rng.randint(8, limit)
+        out.append(make(rng, kind, n, limit))
     return out
 
 

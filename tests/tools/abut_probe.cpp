@@ -3,14 +3,58 @@
 //   abut_probe planar   < {"graphs": [{"n": 5, "edges": [[0, 1], ...]}, ...]}
 //                       > [true, false, ...]
 #include "embed/planar_embedding.h"
+#include "io/project_io.h"
+#include "search/plan_search.h"
 
 #include <nlohmann/json.hpp>
 
+#include <cstdlib>
+#include <fstream>
 #include <iostream>
 #include <string>
 
+// abut_probe search PROJECT [SEED] [THREADS] [TIME]: runs the plan search
+// alone and prints what its best plans miss (for development).
+int search(int argc, char** argv) {
+    const abut::LoadResult loaded = abut::loadProject(argv[2]);
+    if (!loaded.ok()) {
+        std::cerr << "cannot load " << argv[2] << "\n";
+        return 2;
+    }
+    abut::SearchOptions o;
+    if (argc > 3) o.seed = static_cast<unsigned>(std::stoul(argv[3]));
+    if (argc > 4) o.threads = std::stoi(argv[4]);
+    if (argc > 5) o.timeLimit = std::stod(argv[5]);
+    if (argc > 6) o.moves = std::stoll(argv[6]);
+    const abut::SearchResult r = abut::searchPlans(loaded.brief, o);
+    std::cout << "status " << static_cast<int>(r.status) << " plans " << r.plans.size() << " seconds " << r.seconds
+              << " first usable " << r.firstUsableSeconds << " moves " << r.moves << "\n";
+    if (const char* out = std::getenv("ABUT_PROBE_PLAN"); out && !r.plans.empty()) {
+        nlohmann::json rooms = nlohmann::json::array(), spaces = nlohmann::json::array();
+        const abut::SearchPlan& best = r.plans.front();
+        for (int v = 0; v < best.extended.graph.vertexCount(); ++v) {
+            if (best.extended.isPole(v)) continue;
+            const abut::Rect& q = best.sized.rects[v];
+            nlohmann::json j = {{"x", q.x0}, {"y", q.y0}, {"width", q.width()}, {"depth", q.depth()}};
+            if (best.extended.isRoom(v)) {
+                j["id"] = loaded.brief.rooms[v].id;
+                rooms.push_back(j);
+            } else {
+                spaces.push_back(j);
+            }
+        }
+        std::ofstream(out) << nlohmann::json{{"variants", {{{"rooms", rooms}, {"spaces", spaces}}}}}.dump();
+    }
+    for (const abut::SearchPlan& p : r.plans)
+        std::cout << "  cost " << p.cost << " misses area " << p.misses.area << " width " << p.misses.minWidth
+                  << " aspect " << p.misses.maxAspect << " must " << p.misses.must << " facade " << p.misses.facade
+                  << " should " << p.misses.should << " worst " << p.misses.worstAreaError << "\n";
+    return 0;
+}
+
 int main(int argc, char** argv) {
     const std::string mode = argc > 1 ? argv[1] : "";
+    if (mode == "search" && argc > 2) return search(argc, argv);
     if (mode != "planar") {
         std::cerr << "usage: abut_probe planar < graphs.json\n";
         return 2;
