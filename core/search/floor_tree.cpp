@@ -206,14 +206,20 @@ int FloorTree::chainNodes(std::vector<int> nodes, bool vertical) {
 
 bool FloorTree::gatherAround(int hub, const std::vector<int>& lower, const std::vector<int>& upper, bool alongX) {
     if (lower.empty() && upper.empty()) return false;
+    std::vector<char> listed(leafOf_.size(), 0);
+    for (const auto* side : {&lower, &upper})
+        for (int b : *side)
+            if (b < 0 || b >= blocks() || b == hub || listed[b]++) return false;
+    // Detaching one leaf can leave another under a pinwheel (its sibling
+    // cut gone), where it cannot be detached: then nothing changes.
+    const FloorTree before = *this;
+    for (const auto* side : {&lower, &upper})
+        for (int b : *side)
+            if (!detach(leafOf_[b])) {
+                *this = before;
+                return false;
+            }
     const int h = leafOf_[hub];
-    for (const auto* side : {&lower, &upper})
-        for (int b : *side) {
-            const int leaf = leafOf_[b];
-            if (b == hub || nodes_[leaf].parent < 0 || nodes_[nodes_[leaf].parent].kind != Kind::Cut) return false;
-        }
-    for (const auto* side : {&lower, &upper})
-        for (int b : *side) detach(leafOf_[b]);
     const int parent = nodes_[h].parent;
     const int slot = parent >= 0 ? childSlot(parent, h) : -1;
     int node = h;

@@ -104,7 +104,7 @@ private slots:
     }
 
     void layoutIsExactAndMovesKeepTheTreeWhole() {
-        // 2,000 random moves on random trees of 2–60 blocks: after each one
+        // 2,000 random moves (gathers included) on random trees of 2–60 blocks: after each one
         // the tree passes its checker and its layout tiles the outline with
         // every block exactly its share of the area.
         std::mt19937 rng(7);
@@ -123,13 +123,17 @@ private slots:
                 const int a = std::uniform_int_distribution<int>(0, n - 1)(rng);
                 const int b = std::uniform_int_distribution<int>(0, n - 1)(rng);
                 const int v = inner.empty() ? -1 : inner[std::uniform_int_distribution<std::size_t>(0, inner.size() - 1)(rng)];
-                switch (m % 7) {
+                std::vector<int> lower, upper; // up to three blocks either side, duplicates included
+                for (int k = 0; k < 6; ++k)
+                    (k % 2 ? lower : upper).push_back(std::uniform_int_distribution<int>(0, n - 1)(rng));
+                switch (m % 8) {
                 case 0: t.swapBlocks(a, b); break;
                 case 1: t.moveSubtree(t.leafOf(a), t.leafOf(b), m % 2 == 0, m % 3 == 0); break;
                 case 2: if (v >= 0) t.flipCut(v); break;
                 case 3: if (v >= 0) t.makeWheel(v, rng); break;
                 case 4: if (v >= 0) t.turnWheel(v, 1, true, 2); break;
                 case 5: if (v >= 0) t.dissolveWheel(v, rng); break;
+                case 6: t.gatherAround(a, lower, upper, m % 3 == 0); break;
                 default: t.swapSubtrees(t.leafOf(a), t.leafOf(b)); break;
                 }
                 QVERIFY2(t.valid(), qPrintable(QString("trial %1 move %2").arg(trial).arg(m)));
