@@ -532,11 +532,12 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
     Plan plan;
     const auto started = std::chrono::steady_clock::now();
     auto elapsed = [&] { return std::chrono::duration<double>(std::chrono::steady_clock::now() - started).count(); };
-    bool stopped = false;
+    bool stopped = false;  // the caller asked to stop
+    bool outOfTime = false; // the time limit ended the work: what was found stands
     auto keepGoing = [&](double done, const char* step) {
         if (!stopped && monitor && monitor->progress && !monitor->progress(done, step)) stopped = true;
-        if (options.timeLimit > 0 && elapsed() > options.timeLimit) stopped = true;
-        return !stopped;
+        if (options.timeLimit > 0 && elapsed() > options.timeLimit) outOfTime = true;
+        return !stopped && !outOfTime;
     };
     plan.units = brief.units;
     plan.footprint = brief.effectiveFootprint();
@@ -609,7 +610,9 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
     }
     if (plan.variants.empty()) { // stopped before the first layout
         plan.status = stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
-        plan.summary = stopped ? "Stopped before any variant was found." : aug.summary;
+        plan.summary = stopped     ? "Stopped before any variant was found."
+                       : outOfTime ? "The time limit ended the work before any variant was found."
+                                   : aug.summary;
         return plan;
     }
     rankVariants(brief, plan.footprint, plan.variants);
