@@ -1,9 +1,11 @@
 #include "cli_commands.h"
 
 #include "augment/augment.h"
+#include "plan/brief_check.h"
 #include "brief/footprint_check.h"
 #include "io/project_io.h"
 
+#include <cmath>
 #include <iomanip>
 #include <sstream>
 
@@ -54,7 +56,8 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     if (!loadOrReport(path, loaded, err)) return exitBadInput;
     const Brief& brief = loaded.brief;
     const BriefSummary s = summarize(brief);
-    const AugmentResult plan = buildExtendedGraph(brief);
+    const BriefCheck checked = checkBrief(brief);
+    const AugmentResult& plan = checked.arrangement;
     if (plan.status == AugmentStatus::Internal) {
         err << path << ": " << plan.summary << "\n";
         return exitInternal;
@@ -109,9 +112,12 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     out << "  footprint:    " << fixed(s.footprint.width, 2) << " × " << fixed(s.footprint.depth, 2)
         << " " << u << " = " << fixed(s.footprintArea) << " " << u << "²"
         << (s.footprintGiven ? "" : " (none given: sized to the target area)") << "\n";
-    if (s.footprintArea > 0)
-        out << "  spare area:   " << fixed(s.footprintArea - s.targetArea) << " " << u << "² ("
-            << fixed(100.0 * (s.footprintArea - s.targetArea) / s.footprintArea) << "%)\n";
+    if (s.footprintArea > 0) {
+        double spare = s.footprintArea - s.targetArea;
+        if (std::abs(spare) <= 1e-9 * s.footprintArea) spare = 0; // an exact fill, up to rounding
+        out << "  spare area:   " << fixed(spare) << " " << u << "² (" << fixed(100.0 * spare / s.footprintArea)
+            << "%)\n";
+    }
     out << "\n" << plan.summary << "\n";
     for (const Diagnostic& d : diagnostics) {
         if (d.severity == Severity::Info && d.code == "added-contact") continue;

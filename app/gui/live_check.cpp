@@ -1,6 +1,7 @@
 #include "live_check.h"
 
 #include "augment/augment.h"
+#include "plan/brief_check.h"
 #include "brief/footprint_check.h"
 #include "embed/planar_embedding.h"
 
@@ -61,7 +62,11 @@ LiveCheck runLiveCheck(const Brief& brief, quint64 revision) {
         out.marks.rooms.insert(d.rooms.begin(), d.rooms.end());
     }
     if (!brief.rooms.empty()) {
-        const AugmentResult aug = buildExtendedGraph(brief);
+        // One thread, a short search: the editor plans on the other cores.
+        BriefCheckOptions o;
+        o.searchSeconds = 1.5;
+        o.threads = 1;
+        const AugmentResult aug = checkBrief(brief, o).arrangement;
         for (const Diagnostic& d : aug.diagnostics) {
             if (d.code == "added-contact") continue; // extra walls cost the brief nothing
             out.diagnostics.push_back(d);

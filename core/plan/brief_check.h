@@ -1,0 +1,32 @@
+// Whether a rectangular plan can keep every 'must' adjacency and facade wish
+// of a brief: the one check behind `abut-cli check` and the editor's live
+// check.
+//
+// The graph-first augmentation answers first. Its "no" can be a proof (the
+// 'must' graph is not planar, four rooms must all touch) or only a property
+// of the embedding and outline it chose; so where it gives something up, a
+// short plan search looks for a plan that keeps everything, and when it
+// finds one the augmentation's compromise is withdrawn (the plan found is
+// the witness). The search only ever turns a "no" into a "yes" with a plan
+// in hand; it never claims infeasibility.
+#pragma once
+
+#include "augment/augment.h"
+#include "brief/brief.h"
+
+namespace abut {
+
+struct BriefCheckOptions {
+    double searchSeconds = 3.0; // at most, only when the augmentation gives something up (0 = no search)
+    int threads = 0;            // search threads (0 = every core)
+};
+
+struct BriefCheck {
+    AugmentResult arrangement; // the augmentation's, or the searched plan's when it keeps more
+    bool searched = false;     // a plan search ran
+    bool foundBySearch = false; // it found a plan keeping every 'must' and facade wish
+};
+
+BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options = {});
+
+} // namespace abut
