@@ -102,4 +102,24 @@ int lineOfJsonPointer(std::string_view text, const std::string& pointer) {
     return 0;
 }
 
+std::size_t nestingTooDeep(std::string_view text, int maxDepth) {
+    int depth = 0;
+    bool inString = false, escaped = false;
+    for (std::size_t i = 0; i < text.size(); ++i) {
+        const char c = text[i];
+        if (inString) {
+            if (escaped) escaped = false;
+            else if (c == '\\') escaped = true;
+            else if (c == '"') inString = false;
+        } else if (c == '"') {
+            inString = true;
+        } else if (c == '[' || c == '{') {
+            if (++depth > maxDepth) return i;
+        } else if (c == ']' || c == '}') {
+            --depth;
+        }
+    }
+    return std::string_view::npos;
+}
+
 } // namespace abut::detail

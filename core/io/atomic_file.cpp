@@ -2,6 +2,7 @@
 
 #include <cerrno>
 #include <cstdio>
+#include <cstdlib>
 #include <cstring>
 #include <fstream>
 #include <sstream>
@@ -21,10 +22,58 @@ std::string folderOf(const std::string& path) {
     return slash == 0 ? "/" : path.substr(0, slash);
 }
 
+// The file a write to `given` should replace: a symlink is followed (to its
+// final target, which need not exist yet), so the link stays and its target is
+// replaced. Empty (with `why`) when the path cannot be resolved.
+std::string resolveTarget(const std::string& given, std::string& why) {
+    std::string path = given;
+    for (int hops = 0; hops < 40; ++hops) {
+        struct stat st {};
+        if (::lstat(path.c_str(), &st) != 0 || !S_ISLNK(st.st_mode)) return path;
+        std::vector<char> buf(4096);
+        const ssize_t n = ::readlink(path.c_str(), buf.data(), buf.size() - 1);
+        if (n < 0) {
+            why = std::string("cannot read the link: ") + std::strerror(errno);
+            return {};
+        }
+        const std::string to(buf.data(), static_cast<std::size_t>(n));
+        path = (!to.empty() && to[0] == '/') ? to : folderOf(path) + "/" + to;
+    }
+    why = "too many levels of symbolic links";
+    return {};
+}
+
+// Test hook for the command-line tests: ABUT_TEST_WRITE_FAULT=N makes every
+// write fail after N bytes, as a full disk would.
+std::optional<WriteFault> faultFromEnvironment() {
+    const char* v = std::getenv("ABUT_TEST_WRITE_FAULT");
+    if (!v || !*v) return std::nullopt;
+    char* end = nullptr;
+    const unsigned long long n = std::strtoull(v, &end, 10);
+    if (*end != '\0') return std::nullopt;
+    return WriteFault{static_cast<std::size_t>(n)};
+}
+
 } // namespace
 
-WriteResult writeFileAtomically(const std::string& path, const std::string& data,
+WriteResult writeFileAtomically(const std::string& given, const std::string& data,
                                 std::optional<WriteFault> fault) {
+    if (!fault) fault = faultFromEnvironment();
+    std::string why;
+    const std::string path = resolveTarget(given, why);
+    if (path.empty()) return {false, given + ": " + why + "; nothing written"};
+    {
+        // Only regular files are replaced: a device, a pipe or a folder is
+        // never renamed over (nor written into: a plan belongs in a file).
+        struct stat st {};
+        if (::stat(path.c_str(), &st) == 0 && !S_ISREG(st.st_mode))
+            return {false, given + ": not a regular file (" +
+                               std::string(S_ISDIR(st.st_mode)    ? "a folder"
+                                           : S_ISFIFO(st.st_mode) ? "a pipe"
+                                           : S_ISCHR(st.st_mode) || S_ISBLK(st.st_mode) ? "a device"
+                                                                                        : "a special file") +
+                               "); give the path of a file to write"};
+    }
     std::string tmpl = folderOf(path) + "/.abut-save-XXXXXX";
     std::vector<char> name(tmpl.begin(), tmpl.end());
     name.push_back('\0');
@@ -72,6 +121,20 @@ WriteResult writeFileAtomically(const std::string& path, const std::string& data
 }
 
 std::optional<std::string> readFile(const std::string& path, std::string* message) {
+    struct stat st {};
+    if (::stat(path.c_str(), &st) == 0) {
+        if (S_ISDIR(st.st_mode)) {
+            if (message) *message = path + ": is a folder, not a file";
+            return std::nullopt;
+        }
+        if (S_ISREG(st.st_mode) && st.st_size > maxReadBytes) {
+            if (message)
+                *message = path + ": " + std::to_string(st.st_size / (1024 * 1024)) +
+                           " MB, larger than the " + std::to_string(maxReadBytes / (1024 * 1024)) +
+                           " MB Abut reads";
+            return std::nullopt;
+        }
+    }
     std::ifstream in(path, std::ios::binary);
     if (!in) {
         if (message) *message = path + ": cannot open: " + std::strerror(errno);

@@ -17,12 +17,20 @@ struct WriteResult {
 };
 
 // Replaces `path` with `data` atomically: writes a temporary file in the same
-// folder, flushes it to disk, then renames it over `path`. If anything fails
-// the previous file is untouched and the temporary file is removed.
+// folder, checks every write, the flush and the close, then renames it over
+// `path`. If anything fails the previous file is untouched and the temporary
+// file is removed. A symlink is followed and its target replaced; a path that
+// is a folder, a pipe or a device is refused (never renamed over). Every
+// output of Abut goes through here. Without `fault`, the environment variable
+// ABUT_TEST_WRITE_FAULT=N (a test hook) fails every write after N bytes.
 WriteResult writeFileAtomically(const std::string& path, const std::string& data,
                                 std::optional<WriteFault> fault = std::nullopt);
 
-// Whole file as bytes; nullopt (with a one-line message) when it cannot be read.
+// Largest file the readers take (a brief of 10,000 rooms is about 3 MB).
+inline constexpr long long maxReadBytes = 64LL * 1024 * 1024;
+
+// Whole file as bytes; nullopt (with a one-line message) when it cannot be
+// read, is a folder, or is larger than maxReadBytes.
 std::optional<std::string> readFile(const std::string& path, std::string* message);
 
 } // namespace abut

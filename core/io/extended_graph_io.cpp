@@ -41,6 +41,12 @@ ExtendedGraphLoad parseExtendedGraph(const std::string& text, const std::string&
                     (pointer.empty() ? "" : pointer + ": ") + what;
         return out;
     };
+    if (const std::size_t deep = detail::nestingTooDeep(text, detail::maxJsonDepth); deep != std::string::npos) {
+        out.ok = false;
+        out.error = file + ":" + std::to_string(detail::lineOfOffset(text, deep)) + ": nested more than " +
+                    std::to_string(detail::maxJsonDepth) + " levels deep (lists and objects inside each other)";
+        return out;
+    }
     OrderedJson j;
     try {
         j = OrderedJson::parse(text);

@@ -44,10 +44,12 @@ public:
         errors.push_back(std::move(e));
     }
 
-    // A number that must be finite and > 0 (or >= `minimum` when given).
+    // A number that must be finite and > 0 (or >= `atLeast` when given), and
+    // at most `atMost` (the plausible range, see project_io.h).
     std::optional<double> positive(const OrderedJson& obj, const std::string& key,
                                    const std::string& ptr, const char* what,
-                                   std::optional<double> atLeast = std::nullopt) {
+                                   std::optional<double> atLeast = std::nullopt,
+                                   std::optional<double> atMost = std::nullopt) {
         const OrderedJson& v = obj.at(key);
         if (!v.is_number()) {
             error(ptr, std::string(what) + " must be a number, got " + describe(v));
@@ -58,10 +60,16 @@ public:
             error(ptr, std::string(what) + " must be a finite number");
             return std::nullopt;
         }
-        if (atLeast ? d < *atLeast : d <= 0.0) {
-            error(ptr, std::string(what) + (atLeast ? " must be at least " + formatNumber(*atLeast)
-                                                    : std::string(" must be greater than 0")) +
-                           ", got " + formatNumber(d));
+        if (d <= 0.0 && (!atLeast || (*atLeast > 0.0 && *atLeast < 1.0))) {
+            error(ptr, std::string(what) + " must be greater than 0, got " + formatNumber(d));
+            return std::nullopt;
+        }
+        if (atLeast && d < *atLeast) {
+            error(ptr, std::string(what) + " must be at least " + formatNumber(*atLeast) + ", got " + formatNumber(d));
+            return std::nullopt;
+        }
+        if (atMost && d > *atMost) {
+            error(ptr, std::string(what) + " must be at most " + formatNumber(*atMost) + ", got " + formatNumber(d));
             return std::nullopt;
         }
         return d;
@@ -75,6 +83,25 @@ public:
             return std::nullopt;
         }
         return v.get<std::string>();
+    }
+
+    // A string of plain text on one line: control characters (tabs and line
+    // breaks included) are refused, they break exports and tables.
+    std::optional<std::string> text(const OrderedJson& obj, const std::string& key, const std::string& ptr,
+                                    const char* what) {
+        auto s = string(obj, key, ptr, what);
+        if (!s) return s;
+        for (std::size_t i = 0; i < s->size(); ++i) {
+            const unsigned char c = static_cast<unsigned char>((*s)[i]);
+            if (c < 0x20 || c == 0x7F) {
+                char code[8];
+                std::snprintf(code, sizeof code, "U+%04X", c);
+                error(ptr, std::string(what) + " holds a control character (" + code + ") at character " +
+                               std::to_string(i + 1) + "; use plain text on one line");
+                return std::nullopt;
+            }
+        }
+        return s;
     }
 
     std::vector<FileError> errors;
@@ -101,18 +128,18 @@ void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& br
     }
     Room room;
     if (!j.contains("id")) r.error(ptr, "room has no \"id\"");
-    else if (auto id = r.string(j, "id", ptr + "/id", "id")) {
+    else if (auto id = r.text(j, "id", ptr + "/id", "id")) {
         if (id->empty()) r.error(ptr + "/id", "id must not be empty");
         room.id = *id;
     }
     if (j.contains("name"))
-        if (auto name = r.string(j, "name", ptr + "/name", "name")) room.name = *name;
+        if (auto name = r.text(j, "name", ptr + "/name", "name")) room.name = *name;
     if (!j.contains("area")) r.error(ptr, "room \"" + room.id + "\" has no \"area\" (target area)");
-    else if (auto a = r.positive(j, "area", ptr + "/area", "area")) room.area = *a;
+    else if (auto a = r.positive(j, "area", ptr + "/area", "area", minArea, maxArea)) room.area = *a;
     if (j.contains("minWidth"))
-        if (auto w = r.positive(j, "minWidth", ptr + "/minWidth", "minWidth")) room.minWidth = *w;
+        if (auto w = r.positive(j, "minWidth", ptr + "/minWidth", "minWidth", minLength, maxLength)) room.minWidth = *w;
     if (j.contains("maxAspect"))
-        if (auto m = r.positive(j, "maxAspect", ptr + "/maxAspect", "maxAspect", 1.0))
+        if (auto m = r.positive(j, "maxAspect", ptr + "/maxAspect", "maxAspect", 1.0, maxAspectLimit))
             room.maxAspect = *m;
     if (j.contains("areaTolerance"))
         if (auto t = r.positive(j, "areaTolerance", ptr + "/areaTolerance", "areaTolerance", 0.0)) {
@@ -120,7 +147,7 @@ void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& br
             else room.areaTolerance = *t;
         }
     if (j.contains("category"))
-        if (auto c = r.string(j, "category", ptr + "/category", "category")) room.category = *c;
+        if (auto c = r.text(j, "category", ptr + "/category", "category")) room.category = *c;
     if (j.contains("facade")) {
         const OrderedJson& f = j.at("facade");
         if (!f.is_array()) {
@@ -202,19 +229,27 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
         if (!f.is_object() || !f.contains("width") || !f.contains("depth")) {
             r.error("/footprint", "footprint must be an object with \"width\" and \"depth\"");
         } else {
-            auto w = r.positive(f, "width", "/footprint/width", "footprint width");
-            auto d = r.positive(f, "depth", "/footprint/depth", "footprint depth");
+            auto w = r.positive(f, "width", "/footprint/width", "footprint width", minLength, maxLength);
+            auto d = r.positive(f, "depth", "/footprint/depth", "footprint depth", minLength, maxLength);
             if (w && d) brief.footprint = Footprint{*w, *d};
         }
     }
     if (doc.contains("doorWidth"))
-        if (auto w = r.positive(doc, "doorWidth", "/doorWidth", "doorWidth")) brief.doorWidth = *w;
+        if (auto w = r.positive(doc, "doorWidth", "/doorWidth", "doorWidth", minLength, maxLength)) {
+            if (brief.footprint && *w > std::min(brief.footprint->width, brief.footprint->depth))
+                r.error("/doorWidth", "doorWidth " + formatNumber(*w) + " is wider than the footprint's shorter side (" +
+                                          formatNumber(std::min(brief.footprint->width, brief.footprint->depth)) + ")");
+            else
+                brief.doorWidth = *w;
+        }
 
+    bool roomsRead = false; // without a room list, adjacencies and sketch would only repeat its error
     if (!doc.contains("rooms")) {
         r.error("", "the project has no \"rooms\" list");
     } else if (!doc.at("rooms").is_array()) {
-        r.error("/rooms", "rooms must be a list");
+        r.error("/rooms", "rooms must be a list, got " + describe(doc.at("rooms")));
     } else {
+        roomsRead = true;
         const OrderedJson& rooms = doc.at("rooms");
         std::set<std::string> seen;
         for (std::size_t i = 0; i < rooms.size(); ++i) {
@@ -226,7 +261,7 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
                 r.error(ptr + "/id", "duplicate room id \"" + brief.rooms.back().id + "\"");
         }
     }
-    if (doc.contains("adjacencies")) {
+    if (roomsRead && doc.contains("adjacencies")) {
         const OrderedJson& adjs = doc.at("adjacencies");
         if (!adjs.is_array()) {
             r.error("/adjacencies", "adjacencies must be a list");
@@ -244,7 +279,7 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
             }
         }
     }
-    if (doc.contains("sketch")) {
+    if (roomsRead && doc.contains("sketch")) {
         const OrderedJson& sk = doc.at("sketch");
         if (!sk.is_object()) {
             r.error("/sketch", "sketch must be an object mapping room ids to [x, y]");
@@ -256,9 +291,10 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
                     r.error(ptr, "sketch position for room \"" + it.key() +
                                      "\", which the brief does not have");
                 } else if (!p.is_array() || p.size() != 2 || !p[0].is_number() ||
-                           !p[1].is_number() || !std::isfinite(p[0].get<double>()) ||
-                           !std::isfinite(p[1].get<double>())) {
-                    r.error(ptr, "a sketch position must be [x, y] with two finite numbers");
+                           !p[1].is_number() || !(std::abs(p[0].get<double>()) <= maxSketchCoordinate) ||
+                           !(std::abs(p[1].get<double>()) <= maxSketchCoordinate)) {
+                    r.error(ptr, "a sketch position must be [x, y] with two numbers of at most " +
+                                     formatNumber(maxSketchCoordinate) + " either way");
                 } else {
                     brief.sketch.emplace_back(it.key(),
                                               SketchPoint{p[0].get<double>(), p[1].get<double>()});
@@ -297,6 +333,14 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
 
 LoadResult parseProject(const std::string& text, const std::string& fileName) {
     LoadResult result;
+    if (const std::size_t deep = detail::nestingTooDeep(text, detail::maxJsonDepth); deep != std::string::npos) {
+        result.status = LoadStatus::NotJson;
+        result.errors.push_back(FileError{fileName, detail::lineOfOffset(text, deep), "",
+                                          "nested more than " + std::to_string(detail::maxJsonDepth) +
+                                              " levels deep (lists and objects inside each other); "
+                                              "a project file needs a handful"});
+        return result;
+    }
     OrderedJson doc;
     try {
         doc = OrderedJson::parse(text);

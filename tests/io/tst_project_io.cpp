@@ -2,10 +2,16 @@
 // is refused with its expected message, and load → save → load is stable.
 #include "io/atomic_file.h"
 #include "brief/footprint_check.h"
+#include "detail/json_locate.h"
 #include "io/extended_graph_io.h"
 #include "io/project_io.h"
 
 #include <QDir>
+#include <QFile>
+#include <QFileInfo>
+
+#include <sys/stat.h>
+#include <unistd.h>
 
 #include <random>
 #include <QTemporaryDir>
@@ -53,6 +59,11 @@ private slots:
     void invalidExtendedGraphRefused();
     void truncatedFileRefused();
     void corruptedFileRefusedOrIntact();
+    void deepNestingRefusedWithoutCrash();
+    void roomsNotAListIsOneError();
+    void folderGivenAsProjectIsNamed();
+    void specialOutputPaths();
+    void exactFillIsNotOverTheFootprint();
 };
 
 void TestProjectIo::validFileLoads_data() {
@@ -296,6 +307,100 @@ void TestProjectIo::corruptedFileRefusedOrIntact() {
         ++loaded;
     }
     QVERIFY(refused > 0 && loaded > 0); // both outcomes occur: the test sees both paths
+}
+
+// Nesting far deeper than any project (the recursive copy of unknown fields
+// overflowed the stack at about 60,000 levels): refused before parsing, with
+// the line named, and a 50 MB file of '[' costs no more than reading it.
+void TestProjectIo::deepNestingRefusedWithoutCrash() {
+    for (int depth : {101, 100000}) {
+        const std::string text = "{\"format\": \"abut.project\", \"version\": 1, \"rooms\": [],\n\"x\": " +
+                                 std::string(depth, '[') + std::string(depth, ']') + "}";
+        const LoadResult r = parseProject(text, "deep.abut.json");
+        QVERIFY(!r.ok());
+        QCOMPARE(r.errors.size(), std::size_t(1));
+        QCOMPARE(r.errors.front().line, 2);
+        QVERIFY(QString::fromStdString(r.errors.front().message).contains("nested more than 100 levels"));
+    }
+    // 100 levels in an unknown field are kept and written back.
+    const std::string ok = "{\"format\": \"abut.project\", \"version\": 1, \"rooms\": [], \"x\": " +
+                           std::string(99, '[') + std::string(99, ']') + "}";
+    QVERIFY(parseProject(ok, "ok.abut.json").ok());
+    const std::string brackets(50u * 1024 * 1024, '[');
+    QVERIFY(!parseProject(brackets, "brackets.abut.json").ok());
+    // Brackets inside strings do not count.
+    const std::string quoted = "{\"format\": \"abut.project\", \"version\": 1, \"rooms\": [], \"x\": \"" +
+                               std::string(1000, '[') + "\"}";
+    QVERIFY(parseProject(quoted, "quoted.abut.json").ok());
+    QCOMPARE(detail::nestingTooDeep("[\"\\\"[[[\"]", 1), std::string_view::npos);
+}
+
+// "rooms" that is not a list: one error, not one per adjacency and sketch
+// entry that names a room.
+void TestProjectIo::roomsNotAListIsOneError() {
+    const LoadResult r = loadProject((dataDir() + "/invalid/rooms-object.abut.json").toStdString());
+    QVERIFY(!r.ok());
+    QCOMPARE(r.errors.size(), std::size_t(1));
+}
+
+void TestProjectIo::folderGivenAsProjectIsNamed() {
+    QTemporaryDir dir;
+    const LoadResult r = loadProject(dir.path().toStdString());
+    QCOMPARE(r.status, LoadStatus::Unreadable);
+    QVERIFY2(QString::fromStdString(r.errors.front().toString()).contains("is a folder"),
+             r.errors.front().toString().c_str());
+}
+
+// A symlink is followed (its target replaced, the link kept); a pipe or a
+// folder is refused and left as it is. (Never tested on a device under /dev:
+// a faulty build run as root would replace the device node.)
+void TestProjectIo::specialOutputPaths() {
+    QTemporaryDir dir;
+    const QString target = dir.filePath("target.json"), link = dir.filePath("link.json");
+    QVERIFY(writeFileAtomically(target.toStdString(), "old").ok);
+    QVERIFY(QFile::link(QStringLiteral("target.json"), link)); // relative, as users make them
+    QVERIFY(writeFileAtomically(link.toStdString(), "new").ok);
+    QVERIFY(QFileInfo(link).isSymLink());
+    QCOMPARE(readAll(target), std::string("new"));
+    // A dangling link: its target is created.
+    const QString dangling = dir.filePath("dangling.json");
+    QVERIFY(QFile::link(QStringLiteral("made.json"), dangling));
+    QVERIFY(writeFileAtomically(dangling.toStdString(), "made").ok);
+    QVERIFY(QFileInfo(dangling).isSymLink());
+    QCOMPARE(readAll(dir.filePath("made.json")), std::string("made"));
+    // A pipe.
+    const QString fifo = dir.filePath("pipe");
+    QCOMPARE(::mkfifo(fifo.toLocal8Bit().constData(), 0600), 0);
+    const WriteResult w = writeFileAtomically(fifo.toStdString(), "x");
+    QVERIFY(!w.ok);
+    QVERIFY2(QString::fromStdString(w.message).contains("not a regular file (a pipe)"), w.message.c_str());
+    struct stat st {};
+    QCOMPARE(::lstat(fifo.toLocal8Bit().constData(), &st), 0);
+    QVERIFY(S_ISFIFO(st.st_mode));
+    // A folder.
+    QVERIFY(QDir(dir.path()).mkdir("sub"));
+    QVERIFY(!writeFileAtomically(dir.filePath("sub").toStdString(), "x").ok);
+    QVERIFY(QFileInfo(dir.filePath("sub")).isDir());
+    // Nothing else was left behind (the temporary files are gone).
+    QCOMPARE(QDir(dir.path()).entryList(QDir::Files | QDir::Hidden | QDir::System).size(), 5);
+}
+
+// Targets that add up to the footprint's area up to rounding (read off a
+// tiling, rounded to 6 decimals) are not over the footprint.
+void TestProjectIo::exactFillIsNotOverTheFootprint() {
+    Brief b;
+    b.footprint = Footprint{10.3, 11.103};
+    const double total = 10.3 * 11.103;
+    for (int i = 0; i < 7; ++i) {
+        Room r;
+        r.id = "r" + std::to_string(i);
+        r.area = i < 6 ? 16.0 : total - 96.0;
+        b.rooms.push_back(r);
+    }
+    b.rooms.back().area = std::nextafter(b.rooms.back().area, 1e9); // one ulp over
+    QVERIFY(footprintProblems(b).empty());
+    b.rooms.back().area += 1e-6 * total;
+    QVERIFY(!footprintProblems(b).empty());
 }
 
 QTEST_GUILESS_MAIN(TestProjectIo)
