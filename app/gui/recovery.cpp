@@ -1,5 +1,7 @@
 #include "recovery.h"
 
+#include "io/atomic_file.h"
+
 #include "io/project_io.h"
 
 #include <QDir>
@@ -43,8 +45,11 @@ bool Recovery::autosave(const Brief& brief, const QString& originalPath, QString
         if (message) *message = QString::fromStdString(r.message);
         return false;
     }
-    QFile origin(path(QStringLiteral(".origin")));
-    if (origin.open(QIODevice::WriteOnly | QIODevice::Truncate)) origin.write(originalPath.toUtf8());
+    const WriteResult o = writeFileAtomically(path(QStringLiteral(".origin")).toStdString(), originalPath.toStdString());
+    if (!o.ok) {
+        if (message) *message = QString::fromStdString(o.message);
+        return false;
+    }
     return true;
 }
 

@@ -44,4 +44,12 @@ const SketchPoint* Brief::sketchPosition(const std::string& id) const {
 const char* toString(AdjacencyKind k) { return k == AdjacencyKind::Door ? "door" : "wall"; }
 const char* toString(Priority p) { return p == Priority::Must ? "must" : "should"; }
 
+std::size_t controlCharacterAt(const std::string& text) {
+    for (std::size_t i = 0; i < text.size(); ++i) {
+        const unsigned char c = static_cast<unsigned char>(text[i]);
+        if (c < 0x20 || c == 0x7F) return i;
+    }
+    return std::string::npos;
+}
+
 } // namespace abut

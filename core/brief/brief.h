@@ -33,6 +33,20 @@ struct FacadeWish {
     bool operator==(const FacadeWish&) const = default;
 };
 
+// Plausible ranges, in the brief's units (m or ft), checked by every reader
+// and editor: lengths from 0.001 to 10,000 (1 mm to 10 km in metres), areas
+// from 0.000001 to 100,000,000, aspect limits up to 1000, sketch positions
+// within ±10⁹. A door wall is no longer than the footprint's shorter side.
+inline constexpr double minLength = 0.001, maxLength = 10000;
+inline constexpr double minArea = 1e-6, maxArea = 1e8;
+inline constexpr double maxAspectLimit = 1000;
+inline constexpr double maxSketchCoordinate = 1e9;
+
+// Index of the first control character (U+0000–U+001F or U+007F: tabs and
+// line breaks included) in `text`, or std::string::npos. Ids, names and
+// categories hold none.
+std::size_t controlCharacterAt(const std::string& text);
+
 enum class AdjacencyKind : std::uint8_t { Door, Wall };
 enum class Priority : std::uint8_t { Must, Should };
 

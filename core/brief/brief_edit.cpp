@@ -24,16 +24,28 @@ std::string formatValue(double v) {
 }
 
 // A number that must be > 0, or >= `atLeast` when given.
-EditResult readPositive(const std::string& text, const char* what, double& out,
-                        std::optional<double> atLeast = std::nullopt) {
+EditResult readPositive(const std::string& text, const char* what, double& out, double atLeast, double atMost) {
     const auto v = parsePlannerNumber(text);
     if (!v) return EditResult::refused(std::string(what) + " must be a number, got \"" + trimmed(text) + "\".");
-    if (atLeast ? *v < *atLeast : *v <= 0)
-        return EditResult::refused(std::string(what) +
-                                   (atLeast ? " must be at least " + formatValue(*atLeast)
-                                            : std::string(" must be greater than 0")) +
-                                   ", got " + formatValue(*v) + ".");
+    if (*v <= 0 && atLeast > 0 && atLeast < 1)
+        return EditResult::refused(std::string(what) + " must be greater than 0, got " + formatValue(*v) + ".");
+    if (*v < atLeast)
+        return EditResult::refused(std::string(what) + " must be at least " + formatValue(atLeast) + ", got " +
+                                   formatValue(*v) + ".");
+    if (*v > atMost)
+        return EditResult::refused(std::string(what) + " must be at most " + formatValue(atMost) + ", got " +
+                                   formatValue(*v) + ".");
     out = *v;
+    return {};
+}
+
+EditResult readText(const std::string& text, const char* what, std::string& out) {
+    const std::size_t at = controlCharacterAt(text);
+    if (at != std::string::npos)
+        return EditResult::refused(std::string(what) + " holds a control character (a tab, a line break or an "
+                                                       "invisible code) at character " +
+                                   std::to_string(at + 1) + "; use plain text on one line.");
+    out = text;
     return {};
 }
 
@@ -166,13 +178,11 @@ EditResult setRoomField(Brief& brief, int index, RoomField field, const std::str
     const std::string t = trimmed(text);
     switch (field) {
     case RoomField::Name:
-        room.name = t;
-        return {};
+        return readText(t, "Name", room.name);
     case RoomField::Category:
-        room.category = t;
-        return {};
+        return readText(t, "Category", room.category);
     case RoomField::Area:
-        return readPositive(t, "Target area", room.area);
+        return readPositive(t, "Target area", room.area, minArea, maxArea);
     case RoomField::MinWidth:
     case RoomField::MaxAspect: {
         std::optional<double>& slot = field == RoomField::MinWidth ? room.minWidth : room.maxAspect;
@@ -181,8 +191,8 @@ EditResult setRoomField(Brief& brief, int index, RoomField field, const std::str
             return {};
         }
         double v = 0;
-        const EditResult r = field == RoomField::MinWidth ? readPositive(t, "Min width", v)
-                                                          : readPositive(t, "Max aspect", v, 1.0);
+        const EditResult r = field == RoomField::MinWidth ? readPositive(t, "Min width", v, minLength, maxLength)
+                                                          : readPositive(t, "Max aspect", v, 1.0, maxAspectLimit);
         if (r.ok()) slot = v;
         return r;
     }
@@ -209,7 +219,7 @@ EditResult setBriefField(Brief& brief, BriefField field, const std::string& text
         }
         double v = 0;
         const bool width = field == BriefField::FootprintWidth;
-        const EditResult r = readPositive(t, width ? "Footprint width" : "Footprint depth", v);
+        const EditResult r = readPositive(t, width ? "Footprint width" : "Footprint depth", v, minLength, maxLength);
         if (!r.ok()) return r;
         Footprint f = brief.footprint.value_or(brief.effectiveFootprint());
         (width ? f.width : f.depth) = v;
@@ -217,7 +227,16 @@ EditResult setBriefField(Brief& brief, BriefField field, const std::string& text
         return {};
     }
     case BriefField::DoorWidth:
-        return readPositive(t, "Door wall length", brief.doorWidth);
+    {
+        double v = 0;
+        const EditResult r = readPositive(t, "Door wall length", v, minLength, maxLength);
+        if (!r.ok()) return r;
+        if (brief.footprint && v > std::min(brief.footprint->width, brief.footprint->depth))
+            return EditResult::refused("Door wall length " + formatValue(v) +
+                                       " is longer than the footprint's shorter side.");
+        brief.doorWidth = v;
+        return {};
+    }
     case BriefField::Units:
         if (t != "m" && t != "ft") return EditResult::refused("Units must be \"m\" or \"ft\", got \"" + t + "\".");
         brief.units = t;
