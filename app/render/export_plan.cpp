@@ -4,6 +4,7 @@
 #include "export/svg_writer.h"
 #include "io/atomic_file.h"
 
+#include <QBuffer>
 #include <QFile>
 #include <QFileInfo>
 
@@ -36,25 +37,20 @@ bool exportVariant(const QString& target, const Brief& brief, const Plan& plan, 
         const WriteResult w = writeFileAtomically(target.toStdString(), text);
         return w.ok || fail(QString::fromStdString(w.message));
     }
-    const QString temp = target + QStringLiteral(".part");
-    QString why;
-    bool ok = false;
+    // PDF and PNG are drawn in memory and written by the same atomic writer.
+    QByteArray bytes;
     if (format == QLatin1String("pdf")) {
-        ok = writePdfSheet(temp, brief, plan, v, options.sheet, &why);
+        QString why;
+        if (!pdfSheet(bytes, brief, plan, v, options.sheet, &why)) return fail(target + QStringLiteral(": ") + why);
     } else {
         const double ppu = std::clamp(1600.0 / std::max(plan.footprint.width, plan.footprint.depth), 20.0, 200.0);
-        ok = planImage(brief, plan.footprint, v, ppu).save(temp, "PNG");
-        if (!ok) why = target + QStringLiteral(": cannot write the image");
+        QBuffer buffer(&bytes);
+        buffer.open(QIODevice::WriteOnly);
+        if (!planImage(brief, plan.footprint, v, ppu).save(&buffer, "PNG"))
+            return fail(target + QStringLiteral(": cannot draw the image"));
     }
-    if (ok && std::rename(temp.toStdString().c_str(), target.toStdString().c_str()) != 0) {
-        ok = false;
-        why = target + QStringLiteral(": cannot replace the file");
-    }
-    if (!ok) {
-        QFile::remove(temp);
-        return fail(why);
-    }
-    return true;
+    const WriteResult w = writeFileAtomically(target.toStdString(), bytes.toStdString());
+    return w.ok || fail(QString::fromStdString(w.message));
 }
 
 } // namespace abut::render

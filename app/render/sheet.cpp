@@ -3,6 +3,7 @@
 #include "caution.h"
 #include "export/schedule.h"
 
+#include <QBuffer>
 #include <QDate>
 #include <QFileInfo>
 #include <QPageSize>
@@ -104,9 +105,11 @@ QImage planImage(const Brief& brief, const Footprint& fp, const PlanVariant& v, 
     return img;
 }
 
-bool writePdfSheet(const QString& path, const Brief& brief, const Plan& plan, const PlanVariant& v,
-                   const SheetOptions& o, QString* error) {
-    QPdfWriter pdf(path);
+bool pdfSheet(QByteArray& bytes, const Brief& brief, const Plan& plan, const PlanVariant& v, const SheetOptions& o,
+              QString* error) {
+    QBuffer buffer(&bytes);
+    buffer.open(QIODevice::WriteOnly);
+    QPdfWriter pdf(&buffer);
     const QPageSize::PageSizeId id = o.size == SheetSize::A4   ? QPageSize::A4
                                      : o.size == SheetSize::A1 ? QPageSize::A1
                                                                : QPageSize::A3;
@@ -117,7 +120,7 @@ bool writePdfSheet(const QString& path, const Brief& brief, const Plan& plan, co
     pdf.setTitle(o.project + QStringLiteral(" — plan"));
     pdf.setCreator(QStringLiteral("Abut"));
     if (!paintSheet(pdf, 600, brief, plan, v, o)) {
-        if (error) *error = path + QStringLiteral(": cannot write the PDF");
+        if (error) *error = QStringLiteral("cannot draw the PDF sheet");
         return false;
     }
     return true;

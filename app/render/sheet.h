@@ -7,6 +7,7 @@
 #include "plan/plan.h"
 
 #include <QImage>
+#include <QByteArray>
 #include <QString>
 
 class QPagedPaintDevice;
@@ -31,8 +32,9 @@ constexpr unsigned outlineRgb = 0x1F3A93;
 // `widthMm` × `depthMm` (at 1:1) fits a box of `boxW` × `boxH` millimetres.
 int chooseScale(double widthMm, double depthMm, double boxW, double boxH);
 
-bool writePdfSheet(const QString& path, const Brief& brief, const Plan& plan, const PlanVariant& v,
-                   const SheetOptions& options, QString* error);
+// The PDF sheet as bytes (written to disk by the atomic writer).
+bool pdfSheet(QByteArray& bytes, const Brief& brief, const Plan& plan, const PlanVariant& v,
+              const SheetOptions& options, QString* error);
 
 // The same sheet on any paged device (a printer): its page size and
 // orientation as set, at `dotsPerInch`. False when painting cannot start.

@@ -39,7 +39,10 @@ private:
     int next_ = 0x20;
 };
 
-// DXF text is 8-bit in R2000; non-ASCII characters are written as \U+XXXX.
+// DXF text is 8-bit in R2000; non-ASCII characters are written as \U+XXXX
+// (four hex digits, so readers decode only the Basic Multilingual Plane):
+// characters beyond U+FFFF, such as emoji, become U+FFFD, the visible
+// replacement character; control characters are left out.
 std::string dxfText(const std::string& utf8) {
     std::string out;
     for (std::size_t i = 0; i < utf8.size();) {
@@ -54,7 +57,7 @@ std::string dxfText(const std::string& utf8) {
         if (cp < 0x80 && cp >= 0x20) out += static_cast<char>(cp);
         else if (cp >= 0x80) {
             char buf[16];
-            std::snprintf(buf, sizeof buf, "\\U+%04X", cp);
+            std::snprintf(buf, sizeof buf, "\\U+%04X", cp > 0xFFFF ? 0xFFFDu : cp);
             out += buf;
         }
     }

@@ -35,8 +35,14 @@ AreaSchedule areaSchedule(const Brief& brief, const Footprint& fp, const PlanVar
 
 namespace {
 
-std::string quoted(const std::string& field) {
-    if (field.find_first_of(",\"\n") == std::string::npos) return field;
+// A text cell: a leading '=', '+', '-', '@', tab or carriage return gets an
+// apostrophe so that a spreadsheet shows it instead of running it as a
+// formula (OWASP, "CSV Injection"); quoted when it holds a separator, a
+// quote or a line break (RFC 4180).
+std::string quoted(const std::string& text) {
+    std::string field = text;
+    if (!field.empty() && std::string("=+-@\t\r").find(field[0]) != std::string::npos) field.insert(0, 1, '\'');
+    if (field.find_first_of(",\"\r\n") == std::string::npos) return field;
     std::string out = "\"";
     for (char c : field) out += c == '"' ? std::string("\"\"") : std::string(1, c);
     return out + "\"";

@@ -17,7 +17,10 @@ std::string escaped(const std::string& s) {
         case '<': out += "&lt;"; break;
         case '>': out += "&gt;"; break;
         case '"': out += "&quot;"; break;
-        default: out += c;
+        case '\'': out += "&apos;"; break;
+        default:
+            // Control characters are not allowed in XML 1.0 (the loaders refuse them too).
+            if (static_cast<unsigned char>(c) >= 0x20 && c != 0x7F) out += c;
         }
     }
     return out;
