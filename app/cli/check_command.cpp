@@ -66,7 +66,9 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     std::vector<Diagnostic> diagnostics = footprintProblems(brief);
     const bool fits = diagnostics.empty();
     diagnostics.insert(diagnostics.end(), plan.diagnostics.begin(), plan.diagnostics.end());
-    const int code = plan.status == AugmentStatus::Compromised || !fits ? exitNoPlan : exitOk;
+    // No rooms, no plan: `plan` says so too.
+    const int code =
+        plan.status == AugmentStatus::Compromised || plan.status == AugmentStatus::Empty || !fits ? exitNoPlan : exitOk;
     const std::string u = brief.units;
     auto idsOf = [&](const std::vector<int>& rooms) {
         std::vector<std::string> ids;

@@ -16,6 +16,9 @@ constexpr int exitOk = 0;
 constexpr int exitBadInput = 2;
 constexpr int exitNoPlan = 3;
 constexpr int exitInternal = 4; // a result failed its own checker: a bug, never silent
+// Seconds `plan` and `export` spend at most on a plan unless --time-limit
+// says otherwise: the best plan found by then is written.
+constexpr double defaultTimeLimit = 60;
 
 struct ParsedArgs {
     bool ok = true;

@@ -92,6 +92,7 @@ int runExport(const std::vector<std::string>& args, std::ostream& out, std::ostr
     if (!loadOrReport(path, loaded, err)) return exitBadInput;
     const Brief& brief = loaded.brief;
     PlanOptions options;
+    options.timeLimit = defaultTimeLimit;
     options.variants = std::max(options.variants, variant);
     const Plan plan = buildPlan(brief, options);
     if (plan.status == PlanStatus::Internal) {

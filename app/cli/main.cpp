@@ -12,8 +12,9 @@ namespace {
 void printUsage(std::ostream& out) {
     out << "usage: abut-cli COMMAND ...\n"
            "  check PROJECT [--json]     validate a brief and say whether a plan exists\n"
-           "  plan PROJECT -o PLAN.json [--variants K] [--strict] [--seed S]\n"
+           "  plan PROJECT -o PLAN.json [--variants K] [--strict] [--seed S] [--time-limit SEC] [--threads N]\n"
            "                             compute ranked, sized variants and write them\n"
+           "                             (within SEC seconds, default 60; on N threads, default all cores)\n"
            "  labelings EXT.json [--count] [--limit N] [--seed S]\n"
            "                             list or count the regular edge labelings of an extended graph\n"
            "  export PROJECT -o FILE [--variant K] [--sheet A4|A3|A1] [--walls T]\n"

@@ -32,6 +32,7 @@ int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostrea
         return exitBadInput;
     }
     PlanOptions options;
+    options.timeLimit = defaultTimeLimit;
     long long number = 0;
     if (a.values.count("--variants")) {
         if (!parsePositive(a.values.at("--variants"), number) || number < 1 || number > 10000) {
