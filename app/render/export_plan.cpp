@@ -43,7 +43,9 @@ bool exportVariant(const QString& target, const Brief& brief, const Plan& plan, 
         QString why;
         if (!pdfSheet(bytes, brief, plan, v, options.sheet, &why)) return fail(target + QStringLiteral(": ") + why);
     } else {
-        const double ppu = std::clamp(1600.0 / std::max(plan.footprint.width, plan.footprint.depth), 20.0, 200.0);
+        // About 1600 pixels along the longer side, at most 200 per unit: a 10 km
+        // footprint still gives an image of plausible size.
+        const double ppu = std::min(200.0, 1600.0 / std::max(plan.footprint.width, plan.footprint.depth));
         QBuffer buffer(&bytes);
         buffer.open(QIODevice::WriteOnly);
         if (!planImage(brief, plan.footprint, v, ppu).save(&buffer, "PNG"))

@@ -133,6 +133,14 @@ with tempfile.TemporaryDirectory() as tmp:
     r = run("plan", f, "-o", path("exact.plan.json"), "--time-limit", "10")
     expect(r.returncode == 0, f"exact fill: plan exit {r.returncode}: {r.stderr}")
 
+    # Extreme but plausible sizes export in every format.
+    for name, fp, areas in [("huge", (10000, 10000), [1e8 - 1, 1]), ("thin", (0.001, 10000), [5, 5])]:
+        f = path(name + ".abut.json")
+        json.dump(brief([{"id": f"x{k}", "area": a} for k, a in enumerate(areas)], fp, [("x0", "x1")]), open(f, "w"))
+        for ext in ["pdf", "png", "dxf", "svg", "csv"]:
+            r = run("export", f, "-o", path(f"{name}.{ext}"), env={})
+            expect(r.returncode == 0, f"{name} footprint .{ext}: exit {r.returncode}: {r.stderr[-300:]}")
+
     # A folder as the project.
     r = run("check", tmp)
     expect(r.returncode == 2 and "is a folder" in r.stderr, f"folder as project: {r.returncode} {r.stderr!r}")
