@@ -8,7 +8,8 @@ witness), so that an exact answer is known to exist; the plans are invented
         the test (CTest py_sample_plans): each sample matches its drawing,
         the drawing meets the sample's brief exactly (judged with shapely),
         and Abut's best variant is usable (plan_quality's judge, each room's
-        own area tolerance).
+        own area tolerance); the family house's best variant meets every
+        target within 10 % and everything else.
 
 A brief is written as in plan_briefs.py: a door from each room to the
 circulation space it opens on (or to the room it is reached through), a few
@@ -183,8 +184,31 @@ def write(samples):
             f.write("\n")
 
 
+def best_variant_misses(cli, path, brief, band):
+    """What Abut's best variant for the sample at `path` misses (plan_quality's
+    judge), and the time to its first usable plan."""
+    with tempfile.TemporaryDirectory() as tmp:
+        out = os.path.join(tmp, "plan.json")
+        r = subprocess.run([cli, "plan", path, "-o", out, "--time-limit", "30", "--threads", "1"],
+                           capture_output=True, text=True)
+        if r.returncode != 0:
+            return [f"plan exited {r.returncode}: {r.stderr.strip()}"], None
+        plan = json.load(open(out))
+    rooms, spaces = plan_quality.plan_rooms(plan["variants"][0])
+    return plan_quality.misses(brief, rooms, spaces, band=band), plan.get("search", {}).get("firstUsableSeconds")
+
+
 def check(cli, samples):
     failures = 0
+    # The family house has no drawing here (its footprint leaves 7 m² over,
+    # which stands as a spare space): its best variant must still meet every
+    # target within 10 % with nothing else missed.
+    path = os.path.join(samples, "family-house.abut.json")
+    house = json.load(open(path))
+    miss, seconds = best_variant_misses(cli, path, house, 0.10)
+    print(f"family-house: {len(house['rooms'])} rooms; best variant: "
+          f"{'usable' if not miss else '; '.join(miss)}; first usable plan after {seconds} s")
+    failures += bool(miss)
     for name in SAMPLES:
         path = os.path.join(samples, name + ".abut.json")
         sample = json.load(open(path))
@@ -198,19 +222,8 @@ def check(cli, samples):
         if miss:
             print(f"{name}: the drawing does not meet its own brief: " + "; ".join(miss))
             failures += 1
-        with tempfile.TemporaryDirectory() as tmp:
-            out = os.path.join(tmp, "plan.json")
-            r = subprocess.run([cli, "plan", path, "-o", out, "--time-limit", "30", "--threads", "1"],
-                               capture_output=True, text=True)
-            if r.returncode != 0:
-                print(f"{name}: plan exited {r.returncode}: {r.stderr.strip()}")
-                failures += 1
-                continue
-            plan = json.load(open(out))
-        rooms, spaces = plan_quality.plan_rooms(plan["variants"][0])
         band = max(x.get("areaTolerance", 0.05) for x in brief["rooms"])
-        miss = plan_quality.misses(brief, rooms, spaces, band=band)
-        seconds = plan.get("search", {}).get("firstUsableSeconds")
+        miss, seconds = best_variant_misses(cli, path, brief, band)
         print(f"{name}: {len(brief['rooms'])} rooms; best variant: "
               f"{'usable' if not miss else '; '.join(miss)}; first usable plan after {seconds} s")
         failures += bool(miss)
