@@ -2,6 +2,7 @@
 
 #include "augment/augment.h"
 #include "io/atomic_file.h"
+#include "plan/brief_check.h"
 #include "io/extended_graph_io.h"
 #include "io/project_io.h"
 
@@ -19,7 +20,8 @@ int runExtended(const std::vector<std::string>& args, std::ostream& out, std::os
     if (!refuseToOverwriteInput(path, target, err)) return exitBadInput;
     LoadResult loaded;
     if (!loadOrReport(path, loaded, err)) return exitBadInput;
-    const AugmentResult r = buildExtendedGraph(loaded.brief);
+    // The same check as `check`, so the graph written agrees with what it reports.
+    const AugmentResult r = checkBrief(loaded.brief).arrangement;
     if (r.status == AugmentStatus::Empty || r.status == AugmentStatus::Internal) {
         err << path << ": " << r.summary << "\n";
         return r.status == AugmentStatus::Empty ? exitBadInput : exitInternal;

@@ -62,10 +62,9 @@ LiveCheck runLiveCheck(const Brief& brief, quint64 revision) {
         out.marks.rooms.insert(d.rooms.begin(), d.rooms.end());
     }
     if (!brief.rooms.empty()) {
-        // One thread, a short search: the editor plans on the other cores.
+        // A short search on one thread: the editor plans on the other cores.
         BriefCheckOptions o;
         o.searchSeconds = 1.5;
-        o.threads = 1;
         const AugmentResult aug = checkBrief(brief, o).arrangement;
         for (const Diagnostic& d : aug.diagnostics) {
             if (d.code == "added-contact") continue; // extra walls cost the brief nothing

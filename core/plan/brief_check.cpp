@@ -33,12 +33,14 @@ BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options) {
     BriefCheck out;
     out.arrangement = buildExtendedGraph(brief);
     AugmentResult& aug = out.arrangement;
-    if (aug.status != AugmentStatus::Compromised || options.searchSeconds <= 0) return out;
+    if (aug.status != AugmentStatus::Compromised || options.searchMoves < 0 || options.searchSeconds <= 0) return out;
     // A 'must' graph that is not planar cannot be drawn by any plan.
     for (const Diagnostic& d : aug.diagnostics)
         if (d.code == "non-planar") return out;
     SearchOptions search;
-    search.threads = options.threads;
+    search.threads = 1;
+    search.moves = options.searchMoves > 0 ? options.searchMoves
+                                           : 100000LL + 5000LL * static_cast<long long>(brief.rooms.size());
     search.timeLimit = options.searchSeconds;
     search.keep = 1;
     search.variantFlips = 0;

@@ -17,8 +17,11 @@
 namespace abut {
 
 struct BriefCheckOptions {
-    double searchSeconds = 3.0; // at most, only when the augmentation gives something up (0 = no search)
-    int threads = 0;            // search threads (0 = every core)
+    // The search runs only when the augmentation gives something up. One
+    // thread and a move budget make the answer the same on every run (the
+    // CLI's `check` and `extended` agree); the time cap bounds big briefs.
+    long long searchMoves = 0;  // per search (0 = 100,000 + 5,000 per room; −1 = no search)
+    double searchSeconds = 3.0; // at most
 };
 
 struct BriefCheck {
