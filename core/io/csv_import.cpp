@@ -146,6 +146,10 @@ struct Importer {
                 error(rows[0].line, column(int(c), "") + "the header row needs a room name here");
                 continue;
             }
+            if (controlCharacterAt(label) != std::string::npos) {
+                error(rows[0].line, column(int(c), "") + "the room name holds a control character; use plain text");
+                continue;
+            }
             for (std::size_t d = 1; d < c; ++d)
                 if (trimmed(head[d]) == label) error(rows[0].line, column(int(c), label) + "room named twice");
             colRoom[c] = roomFor(label);

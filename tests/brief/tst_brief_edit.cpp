@@ -213,6 +213,9 @@ private slots:
         QTest::newRow("halves disagree") << "disagreeing-halves.csv" << "disagreeing-halves.csv:3: column 2 (A): the mark \"W\" disagrees with the other half of the matrix (line 2)";
         QTest::newRow("unknown mark") << "unknown-mark.csv" << "unknown-mark.csv:2: column 3 (B): unknown mark \"Q\"";
         QTest::newRow("negative area") << "negative-area.csv" << "negative-area.csv:3: column 2 (area): Target area must be greater than 0";
+        QTest::newRow("huge area") << "huge-area.csv" << "huge-area.csv:2: column 2 (area): Target area must be at most 1e+08";
+        QTest::newRow("control character in a list") << "control-character-list.csv" << "control-character-list.csv:3: column 1 (name): Name holds a control character";
+        QTest::newRow("control character in a matrix") << "control-character-matrix.csv" << "control-character-matrix.csv:1: column 2: the room name holds a control character";
     }
     void csvInvalid() {
         QFETCH(QString, file);
