@@ -70,6 +70,14 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     const int code =
         plan.status == AugmentStatus::Compromised || plan.status == AugmentStatus::Empty || !fits ? exitNoPlan : exitOk;
     const std::string u = brief.units;
+    // A plan that exists by its arrangement but cannot meet the numbers is no
+    // plan: the summary must not say otherwise above the errors that say so.
+    const std::string summary =
+        fits ? plan.summary
+             : plan.status == AugmentStatus::Feasible
+                   ? std::string("The rooms can be arranged with every adjacency and facade wish, but no plan meets "
+                                 "these numbers:")
+                   : plan.summary + " Nor can a plan meet these numbers:";
     auto idsOf = [&](const std::vector<int>& rooms) {
         std::vector<std::string> ids;
         for (int r : rooms) ids.push_back(brief.rooms[r].id);
@@ -80,7 +88,7 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
         j["file"] = path;
         j["status"] = toString(plan.status);
         j["feasible"] = plan.status == AugmentStatus::Feasible && fits;
-        j["summary"] = plan.summary;
+        j["summary"] = summary;
         j["rooms"] = s.rooms;
         j["adjacencies"] = {{"door", s.doors}, {"wall", s.walls}, {"must", s.musts},
                             {"should", s.shoulds}};
@@ -118,9 +126,13 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
         double spare = s.footprintArea - s.targetArea;
         if (std::abs(spare) <= 1e-9 * s.footprintArea) spare = 0; // an exact fill, up to rounding
         out << "  spare area:   " << fixed(spare) << " " << u << "² (" << fixed(100.0 * spare / s.footprintArea)
-            << "%)\n";
+            << "%)"
+            << (spare > 0 ? brief.surplus == Surplus::Spread ? "; spread over the rooms (surplus: spread)"
+                                                              : "; left as spare space beyond the rooms' bands"
+                          : "")
+            << "\n";
     }
-    out << "\n" << plan.summary << "\n";
+    out << "\n" << summary << "\n";
     for (const Diagnostic& d : diagnostics) {
         if (d.severity == Severity::Info && d.code == "added-contact") continue;
         out << "  " << toString(d.severity) << ": " << d.message << "\n";

@@ -1,6 +1,7 @@
 #include "cli_commands.h"
 
 #include "io/atomic_file.h"
+#include "plan/unmet.h"
 #include "io/plan_io.h"
 #include "io/project_io.h"
 #include "plan/plan_builder.h"
@@ -100,6 +101,15 @@ int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostrea
     out << target << ": " << plan.variants.size() << " variant(s); " << plan.summary << "\n";
     for (const Diagnostic& d : plan.diagnostics)
         if (d.severity != Severity::Info) out << "  " << toString(d.severity) << ": " << d.message << "\n";
+    // What the best variant does not meet, so the output never says less than the plan shows.
+    const std::vector<UnmetItem> unmet = unmetRequirements(loaded.brief, plan.footprint, plan.variants.front());
+    if (unmet.empty()) {
+        out << "  The best variant meets every requirement of the brief.\n";
+    } else {
+        out << "  The best variant does not meet " << unmet.size() << " requirement(s):\n";
+        for (std::size_t k = 0; k < unmet.size() && k < 20; ++k) out << "    " << unmet[k].text << "\n";
+        if (unmet.size() > 20) out << "    and " << unmet.size() - 20 << " more (see \"unmet\" in the plan file)\n";
+    }
     return exitOk;
 }
 

@@ -576,7 +576,7 @@ void MainWindow::briefChanged() {
 bool MainWindow::planning() const { return runner_->busy() || planTimer_.isActive(); }
 
 void MainWindow::resizeCurrent() {
-    const Brief& b = doc_->brief();
+    const Brief b = plannedBrief(doc_->brief());
     const Footprint fp = b.effectiveFootprint();
     SizingOptions o = planSizingOptions(b);
     o.lockedRooms.assign(locked_.begin(), locked_.end());

@@ -96,7 +96,8 @@ void PlanView::rebuildProblem() {
     if (!has_ || v_.extended.graph.vertexCount() == 0 || v_.rooms.size() != brief_.rooms.size()) return;
     SizingOptions o = planSizingOptions(brief_);
     o.lockedRooms.assign(locked_.begin(), locked_.end());
-    problem_ = std::make_unique<SizingProblem>(brief_, v_.extended, v_.labeling, fp_, o);
+    planned_ = plannedBrief(brief_);
+    problem_ = std::make_unique<SizingProblem>(planned_, v_.extended, v_.labeling, fp_, o);
     state_ = problem_->stateOf(vertexRects(v_));
 }
 

@@ -78,6 +78,7 @@ private:
     QRectF toScreen(const Rect& r) const;
 
     Brief brief_;
+    Brief planned_; // brief_ as planned (targets grown with `surplus: spread`); the sizing problem refers to it
     Footprint fp_;
     PlanVariant v_;
     bool has_ = false;

@@ -2,6 +2,7 @@
 
 #include "caution.h"
 #include "export/schedule.h"
+#include "plan/unmet.h"
 
 #include <QBuffer>
 #include <QDate>
@@ -183,7 +184,12 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
     p.setFont(fontMm(4.5, dpmm, true));
     p.drawText(mm(x0 + 3, y, colW, 7), Qt::AlignLeft | Qt::AlignVCenter, QStringLiteral("Area schedule"));
     y += 9;
-    const int rows = static_cast<int>(sched.rows.size()) + 4;
+    // What the variant does not meet, listed under the schedule (at most
+    // eight lines; the plan file has them all).
+    const std::vector<UnmetItem> unmet = unmetRequirements(brief, fp, v);
+    const int unmetShown = std::min<int>(static_cast<int>(unmet.size()), unmet.size() > 8 ? 7 : 8);
+    const int unmetLines = 2 + unmetShown + (static_cast<int>(unmet.size()) > unmetShown ? 1 : 0);
+    const int rows = static_cast<int>(sched.rows.size()) + 4 + unmetLines;
     const double titleH = 42, cautionH = 24;
     const double rowH = std::min(5.0, (H - margin - titleH - cautionH - y - 6) / rows);
     const double text = rowH * 0.62;
@@ -220,6 +226,24 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
     row({QStringLiteral("Footprint"), QString(), QString::number(sched.footprintArea, 'f', 1), QString(),
          QString::number(fp.width, 'f', 2) + QString::fromUtf8(" × ") + QString::number(fp.depth, 'f', 2)},
         true);
+
+    y += rowH * 0.5;
+    p.setFont(fontMm(text, dpmm, true));
+    p.drawText(mm(x0 + 3, y, colW, rowH), Qt::AlignLeft | Qt::AlignVCenter,
+               unmet.empty() ? QStringLiteral("Every requirement of the brief is met.") : QStringLiteral("Not met:"));
+    y += rowH;
+    p.setFont(fontMm(text, dpmm));
+    for (int k = 0; k < unmetShown; ++k) {
+        p.drawText(mm(x0 + 3, y, colW, rowH), Qt::AlignLeft | Qt::AlignVCenter,
+                   QFontMetricsF(p.font()).elidedText(QStringLiteral("\u2013 ") + QString::fromStdString(unmet[k].text),
+                                                      Qt::ElideRight, colW * dpmm));
+        y += rowH;
+    }
+    if (static_cast<int>(unmet.size()) > unmetShown) {
+        p.drawText(mm(x0 + 3, y, colW, rowH), Qt::AlignLeft | Qt::AlignVCenter,
+                   QStringLiteral("and %1 more (see the plan file)").arg(unmet.size() - unmetShown));
+        y += rowH;
+    }
 
     // Caution and title block at the foot of the side column.
     const double cy = H - margin - titleH - cautionH;

@@ -52,4 +52,14 @@ std::size_t controlCharacterAt(const std::string& text) {
     return std::string::npos;
 }
 
+Brief plannedBrief(const Brief& brief) {
+    Brief out = brief;
+    if (brief.surplus != Surplus::Spread || !brief.footprint) return out;
+    const double total = brief.totalTargetArea();
+    const double area = brief.footprint->width * brief.footprint->depth;
+    if (total <= 0 || total >= area) return out;
+    for (Room& r : out.rooms) r.area *= area / total;
+    return out;
+}
+
 } // namespace abut

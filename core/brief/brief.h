@@ -85,10 +85,16 @@ struct SketchPoint {
     bool operator==(const SketchPoint&) const = default;
 };
 
+// What happens to footprint area the targets leave over: it stays as spare
+// spaces once the rooms have taken what their bands allow (the default), or
+// every room grows in proportion to its target.
+enum class Surplus : std::uint8_t { Spare, Spread };
+
 struct Brief {
     std::string units = "m"; // "m" or "ft"
     std::optional<Footprint> footprint;
     double doorWidth = 0.9; // shared wall needed by a door adjacency, units
+    Surplus surplus = Surplus::Spare;
     std::vector<Room> rooms;
     std::vector<Adjacency> adjacencies;
     std::vector<std::pair<std::string, SketchPoint>> sketch; // in file order
@@ -103,6 +109,10 @@ struct Brief {
     Footprint effectiveFootprint() const;
     const SketchPoint* sketchPosition(const std::string& id) const;
 };
+
+// The brief as it is planned: with `surplus: spread`, every target grown in
+// proportion so that they fill the footprint; otherwise the brief itself.
+Brief plannedBrief(const Brief& brief);
 
 const char* toString(AdjacencyKind k);
 const char* toString(Priority p);

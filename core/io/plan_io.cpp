@@ -1,5 +1,7 @@
 #include "io/plan_io.h"
 
+#include "plan/unmet.h"
+
 #include <cmath>
 
 namespace abut {
@@ -46,6 +48,20 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
         OrderedJson unmet = OrderedJson::array();
         for (int r : v.unmetFacade) unmet.push_back(brief.rooms[r].id);
         vj["unmetFacade"] = unmet;
+        OrderedJson notMet = OrderedJson::array();
+        for (const UnmetItem& u : unmetRequirements(brief, plan.footprint, v)) {
+            OrderedJson item = {{"requirement", u.requirement}, {"field", u.field}};
+            OrderedJson ids = OrderedJson::array();
+            for (int r : u.rooms) ids.push_back(brief.rooms[r].id);
+            item["rooms"] = ids;
+            if (u.requirement != "facade") {
+                item["wanted"] = tidy(u.wanted);
+                item["got"] = tidy(u.got);
+            }
+            item["text"] = u.text;
+            notMet.push_back(item);
+        }
+        vj["unmet"] = notMet;
         vj["oneSided"] = v.oneSided;
         vj["usable"] = v.misses.usable();
         vj["metrics"] = {{"worstAreaError", tidy(v.metrics.worstAreaError)},

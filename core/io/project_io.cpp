@@ -234,6 +234,14 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
             if (w && d) brief.footprint = Footprint{*w, *d};
         }
     }
+    if (doc.contains("surplus")) {
+        auto v = r.string(doc, "surplus", "/surplus", "surplus");
+        if (v && *v == "spare") brief.surplus = Surplus::Spare;
+        else if (v && *v == "spread") brief.surplus = Surplus::Spread;
+        else if (v)
+            r.error("/surplus", "unknown surplus \"" + *v + "\"; use \"spare\" (area left over stays as spare space) "
+                                "or \"spread\" (every room grows in proportion)");
+    }
     if (doc.contains("doorWidth"))
         if (auto w = r.positive(doc, "doorWidth", "/doorWidth", "doorWidth", minLength, maxLength)) {
             if (brief.footprint && *w > std::min(brief.footprint->width, brief.footprint->depth))
@@ -325,7 +333,7 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
             }
         }
     }
-    brief.unknownFields = unknownOf(doc, {"format", "version", "units", "footprint", "doorWidth",
+    brief.unknownFields = unknownOf(doc, {"format", "version", "units", "footprint", "doorWidth", "surplus",
                                           "rooms", "adjacencies", "sketch", "variants"});
 }
 
@@ -418,6 +426,7 @@ std::string serializeProject(const Brief& brief) {
     if (brief.footprint)
         doc["footprint"] = {{"width", brief.footprint->width}, {"depth", brief.footprint->depth}};
     doc["doorWidth"] = brief.doorWidth;
+    if (brief.surplus == Surplus::Spread) doc["surplus"] = "spread"; // "spare" is the default
     OrderedJson rooms = OrderedJson::array();
     for (const Room& room : brief.rooms) {
         OrderedJson j = OrderedJson::object();

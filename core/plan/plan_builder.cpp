@@ -518,6 +518,56 @@ private:
 
 } // namespace
 
+// The augmentation's diagnostics speak of its own graph; the best variant
+// may come from the search and give up something else, or nothing. Reworded
+// so that they say what the best variant gives up: the reason stays (four
+// rooms that must all touch, crossing lines), the adjacency named is the one
+// the variant drops, and facade notes are the variant's own.
+namespace {
+void reconcileDiagnostics(const Brief& brief, const PlanVariant& best, std::vector<Diagnostic>& diagnostics) {
+    auto describe = [&](int k) {
+        const Adjacency& a = brief.adjacencies[k];
+        return brief.rooms[brief.roomIndex(a.a)].displayName() + "\u2013" + brief.rooms[brief.roomIndex(a.b)].displayName() +
+               " (" + toString(a.kind) + ", " + toString(a.priority) + ")";
+    };
+    std::vector<int> droppedMusts;
+    for (int d : best.dropped)
+        if (brief.adjacencies[d].priority == Priority::Must) droppedMusts.push_back(d);
+    std::vector<Diagnostic> out;
+    for (Diagnostic d : diagnostics) {
+        if (d.code == "facade-unmet" || (d.code == "facade-conflict" && best.unmetFacade.empty())) continue;
+        if (d.code == "dropped-adjacency") {
+            const bool same = std::all_of(d.adjacencies.begin(), d.adjacencies.end(), [&](int a) {
+                return std::find(best.dropped.begin(), best.dropped.end(), a) != best.dropped.end();
+            });
+            if (!same) {
+                // The adjacencies the best variant drops among this note's rooms.
+                std::vector<int> mine;
+                for (int k : droppedMusts) {
+                    const Adjacency& a = brief.adjacencies[k];
+                    const int ia = brief.roomIndex(a.a), ib = brief.roomIndex(a.b);
+                    if (std::find(d.rooms.begin(), d.rooms.end(), ia) != d.rooms.end() &&
+                        std::find(d.rooms.begin(), d.rooms.end(), ib) != d.rooms.end())
+                        mine.push_back(k);
+                }
+                const std::size_t cut = d.message.find(". Dropped ");
+                if (mine.empty() || cut == std::string::npos) continue; // the variant keeps what this note gave up
+                std::string list;
+                for (int k : mine) list += (list.empty() ? "" : ", ") + describe(k);
+                d.message = d.message.substr(0, cut + 1) + " The best variant drops " + list + ".";
+                d.adjacencies = mine;
+            }
+        }
+        out.push_back(std::move(d));
+    }
+    for (int r : best.unmetFacade)
+        out.push_back({Severity::Warning, "facade-unmet",
+                       brief.rooms[r].displayName() + " does not reach the facade it wishes for in the best variant.",
+                       {r}, {}});
+    diagnostics = std::move(out);
+}
+} // namespace
+
 SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options) {
     SizingOptions s;
     s.doorWidth = brief.doorWidth;
@@ -528,7 +578,8 @@ SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options) 
     return s;
 }
 
-Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor* monitor) {
+Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor* monitor) {
+    const Brief brief = plannedBrief(given); // `surplus: spread` grows the targets to fill the footprint
     Plan plan;
     const auto started = std::chrono::steady_clock::now();
     auto elapsed = [&] { return std::chrono::duration<double>(std::chrono::steady_clock::now() - started).count(); };
@@ -628,6 +679,7 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
     plan.variants = std::move(kept);
     for (std::size_t i = 0; i < plan.variants.size(); ++i) plan.variants[i].rank = static_cast<int>(i) + 1;
     const PlanVariant& v = plan.variants.front();
+    reconcileDiagnostics(brief, v, plan.diagnostics);
     bool mustLost = !v.unmetFacade.empty();
     for (int d : v.dropped) mustLost = mustLost || brief.adjacencies[d].priority == Priority::Must;
     if (v.metrics.shortDoorWalls > 0)
@@ -636,7 +688,11 @@ Plan buildPlan(const Brief& brief, const PlanOptions& options, const PlanMonitor
                                         " door adjacency(ies) get less than a door's width of wall in the footprint.",
                                     {}, {}});
     plan.status = stopped ? PlanStatus::Cancelled : mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
-    plan.summary = stopped ? "Stopped: " + std::to_string(plan.variants.size()) + " variant(s) found so far." : aug.summary;
+    plan.summary = stopped ? "Stopped: " + std::to_string(plan.variants.size()) + " variant(s) found so far."
+                   : aug.status == AugmentStatus::Compromised && !mustLost
+                       // the search found what the augmentation could not
+                       ? std::string("A rectangular plan exists with every 'must' adjacency and facade wish.")
+                       : aug.summary;
     plan.stats.seconds = elapsed();
     if (!stopped) keepGoing(1.0, "done");
     return plan;

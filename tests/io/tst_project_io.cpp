@@ -82,6 +82,7 @@ void TestProjectIo::validFileLoads() {
     const LoadResult again = parseProject(once, "saved");
     QVERIFY2(again.ok(), joined(again.errors).c_str());
     QCOMPARE(serializeProject(again.brief), once);
+    QCOMPARE(again.brief.surplus, r.brief.surplus);
 }
 
 void TestProjectIo::invalidFileRefused_data() {

@@ -1,0 +1,90 @@
+#include "plan/unmet.h"
+
+#include "search/requirements.h"
+
+#include <algorithm>
+#include <cmath>
+#include <cstdio>
+
+namespace abut {
+
+namespace {
+
+std::string number(double v, int decimals) {
+    char buf[64];
+    std::snprintf(buf, sizeof buf, "%.*f", decimals, v);
+    return buf;
+}
+
+const char* sideName(Side s) {
+    switch (s) {
+    case Side::N: return "north";
+    case Side::E: return "east";
+    case Side::S: return "south";
+    default: return "west";
+    }
+}
+
+} // namespace
+
+std::vector<UnmetItem> unmetRequirements(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
+    std::vector<UnmetItem> out;
+    if (v.rooms.size() != brief.rooms.size()) return out;
+    const Brief planned = plannedBrief(brief); // targets as planned (grown with `surplus: spread`)
+    const std::string& u = brief.units;
+    const std::string u2 = u + "\xC2\xB2";
+    for (int i = 0; i < static_cast<int>(brief.rooms.size()); ++i) {
+        const Room& room = planned.rooms[i];
+        const Rect& r = v.rooms[i];
+        const std::string at = "/rooms/" + std::to_string(i);
+        const std::string& name = room.displayName();
+        const double area = r.area(), dev = (area - room.area) / room.area;
+        if (std::abs(dev) > room.tolerance() + 1e-9)
+            out.push_back({"area", at + "/area", {i}, -1, room.area, area,
+                           name + ": " + number(area, 1) + " " + u2 + " for a target of " + number(room.area, 1) + " " +
+                               u2 + " (" + (dev > 0 ? "+" : "") + number(100 * dev, 0) + " %, band ±" +
+                               number(100 * room.tolerance(), 0) + " %)"});
+        const double shortSide = std::min(r.width(), r.depth()), longSide = std::max(r.width(), r.depth());
+        if (room.minWidth && shortSide < *room.minWidth - 1e-6)
+            out.push_back({"minWidth", at + "/minWidth", {i}, -1, *room.minWidth, shortSide,
+                           name + ": " + number(shortSide, 2) + " " + u + " wide, minimum " + number(*room.minWidth, 2) +
+                               " " + u});
+        if (room.maxAspect && shortSide > 0 && longSide / shortSide > *room.maxAspect + 1e-6)
+            out.push_back({"maxAspect", at + "/maxAspect", {i}, -1, *room.maxAspect, longSide / shortSide,
+                           name + ": proportions 1:" + number(longSide / shortSide, 1) + ", limit 1:" +
+                               number(*room.maxAspect, 1)});
+        if (!room.facade.empty()) {
+            const double tol = 1e-9 * std::max(fp.width, fp.depth);
+            std::string missed;
+            if (room.facade.anySide) {
+                bool any = false;
+                for (Side s : allSides) any = any || reachesSide(r, s, fp.width, fp.depth, tol);
+                if (!any) missed = "an outside wall";
+            }
+            for (Side s : allSides)
+                if (room.facade.has(s) && !reachesSide(r, s, fp.width, fp.depth, tol))
+                    missed += std::string(missed.empty() ? "the " : ", the ") + sideName(s) + " facade";
+            if (!missed.empty())
+                out.push_back({"facade", at + "/facade", {i}, -1, 0, 0, name + ": does not reach " + missed});
+        }
+    }
+    for (int k = 0; k < static_cast<int>(brief.adjacencies.size()); ++k) {
+        const Adjacency& a = brief.adjacencies[k];
+        if (a.priority != Priority::Must) continue;
+        const int ia = brief.roomIndex(a.a), ib = brief.roomIndex(a.b);
+        if (ia < 0 || ib < 0) continue;
+        const double wall = sharedWallLength(v.rooms[ia], v.rooms[ib], 1e-9 * std::max(fp.width, fp.depth));
+        const bool door = a.kind == AdjacencyKind::Door;
+        const double need = door ? brief.doorWidth : 1e-9;
+        if (wall >= need - 1e-6) continue;
+        const std::string names = brief.rooms[ia].displayName() + " and " + brief.rooms[ib].displayName();
+        out.push_back({"adjacency", "/adjacencies/" + std::to_string(k), {ia, ib}, k, door ? brief.doorWidth : 0, wall,
+                       wall <= 1e-9 ? names + ": the 'must' " + std::string(door ? "door" : "wall") +
+                                          " is dropped (they do not touch)"
+                                    : names + ": " + number(wall, 2) + " " + u + " of shared wall, a door needs " +
+                                          number(brief.doorWidth, 2) + " " + u});
+    }
+    return out;
+}
+
+} // namespace abut

@@ -1,0 +1,103 @@
+"""What abut-cli says agrees with the plan it draws (CTest py_plan_texts):
+
+- `check` on a brief whose targets exceed the footprint does not claim that
+  a plan exists (exit 3);
+- `plan` lists what the best variant does not meet, and the plan file's
+  `unmet` says the same as the judge in plan_quality.py (shapely) for the
+  'must' adjacencies and the facades;
+- the PDF sheet of a plan that drops a 'must' lists it under "Not met"
+  (read back with poppler's pdftotext);
+- surplus: with "spare" every room stays within its band and spare spaces
+  take the rest of the footprint; with "spread" every room grows in
+  proportion (about 10 % here) and no spare space is left (areas measured
+  with shapely).
+
+    /usr/bin/python3 tests/python/check_texts.py ABUT_CLI SAMPLES_DIR
+"""
+import json
+import os
+import subprocess
+import sys
+import tempfile
+
+from shapely.geometry import box
+
+sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
+import plan_quality  # noqa: E402
+
+cli, samples = sys.argv[1], sys.argv[2]
+failures = []
+
+
+def expect(cond, what):
+    if not cond:
+        failures.append(what)
+        print("FAIL:", what)
+
+
+def run(*args):
+    env = dict(os.environ, QT_QPA_PLATFORM="offscreen")
+    return subprocess.run([cli, *args], capture_output=True, text=True, env=env)
+
+
+with tempfile.TemporaryDirectory() as tmp:
+    # An over-full brief.
+    over = os.path.join(tmp, "over.abut.json")
+    json.dump({"format": "abut.project", "version": 1, "footprint": {"width": 2, "depth": 2},
+               "rooms": [{"id": "a", "area": 50}, {"id": "b", "area": 50}],
+               "adjacencies": [{"rooms": ["a", "b"]}]}, open(over, "w"))
+    r = run("check", over)
+    expect(r.returncode == 3, f"over-full check exit {r.returncode}")
+    expect("plan exists" not in r.stdout, f"over-full check claims a plan exists: {r.stdout!r}")
+    expect("more than the footprint" in r.stdout, "over-full check names the cause")
+
+    # A brief with a dropped 'must': the four-room studio.
+    studio = os.path.join(samples, "four-way-studio.abut.json")
+    brief = json.load(open(studio))
+    out = os.path.join(tmp, "studio.plan.json")
+    r = run("plan", studio, "-o", out, "--time-limit", "10")
+    expect(r.returncode == 0, f"studio plan exit {r.returncode}")
+    plan = json.load(open(out))
+    best = plan["variants"][0]
+    rooms, spaces = plan_quality.plan_rooms(best)
+    judged = [m for m in plan_quality.misses(brief, rooms, spaces) if m.startswith("must ") or "facade" in m]
+    listed = [u for u in best["unmet"] if u["requirement"] in ("adjacency", "facade")]
+    expect(len(judged) == len(listed) and listed, f"plan file unmet {listed} against the judge's {judged}")
+    for u in best["unmet"]:
+        expect(u["text"] in r.stdout, f"plan output lists {u['text']!r}")
+    pdf = os.path.join(tmp, "studio.pdf")
+    expect(run("export", studio, "-o", pdf).returncode == 0, "studio export")
+    text = subprocess.run(["pdftotext", "-layout", pdf, "-"], capture_output=True, text=True).stdout
+    expect("Not met" in text, "the sheet has a 'Not met' list")
+    for u in listed:
+        words = u["text"].split(":")[0]  # "Archive and Meeting room"
+        expect(words in " ".join(text.split()), f"the sheet names {words!r}")
+
+    # Surplus: 10 % more footprint than targets.
+    rooms = [{"id": f"r{k}", "area": a} for k, a in enumerate([20, 15, 12, 12, 10, 10, 8, 8, 5])]
+    total = sum(x["area"] for x in rooms)  # 100
+    base = {"format": "abut.project", "version": 1, "footprint": {"width": 11, "depth": 10}, "rooms": rooms,
+            "adjacencies": [{"rooms": ["r0", f"r{k}"]} for k in range(1, 9)]}
+    for mode in ["spare", "spread"]:
+        path = os.path.join(tmp, f"{mode}.abut.json")
+        json.dump(dict(base, surplus=mode), open(path, "w"))
+        out = os.path.join(tmp, f"{mode}.plan.json")
+        r = run("plan", path, "-o", out, "--time-limit", "20", "--threads", "1")
+        expect(r.returncode == 0, f"surplus {mode}: plan exit {r.returncode}: {r.stderr}")
+        v = json.load(open(out))["variants"][0]
+        got = {q["id"]: box(q["x"], q["y"], q["x"] + q["width"], q["y"] + q["depth"]).area for q in v["rooms"]}
+        spare = sum(box(s["x"], s["y"], s["x"] + s["width"], s["y"] + s["depth"]).area for s in v.get("spaces", []))
+        expect(abs(sum(got.values()) + spare - 110) < 1e-6, f"surplus {mode}: rooms and spare fill the footprint")
+        for x in rooms:
+            ratio = got[x["id"]] / x["area"]
+            if mode == "spare":
+                expect(abs(ratio - 1) <= 0.05 + 1e-9, f"spare: {x['id']} at {ratio:.3f} of its target")
+            else:
+                expect(abs(ratio - 1.1) <= 0.05 * 1.1 + 1e-9, f"spread: {x['id']} at {ratio:.3f} of its target")
+        if mode == "spare":
+            expect(spare >= 110 - total * 1.05 - 1e-6, f"spare: spare spaces {spare:.2f} hold what the bands leave")
+        else:
+            expect(spare < 1e-6, f"spread: no spare space ({spare:.2f})")
+
+print(f"{len(failures)} failure(s)")
+sys.exit(1 if failures else 0)
