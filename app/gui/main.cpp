@@ -27,8 +27,12 @@ int main(int argc, char** argv) {
                                QStringLiteral("FILE"));
     QCommandLineOption sizeOpt(QStringLiteral("size"), QStringLiteral("Window size for --screenshot."),
                                QStringLiteral("WxH"), QStringLiteral("1400x900"));
+    QCommandLineOption waitOpt(QStringLiteral("wait"),
+                               QStringLiteral("Seconds --screenshot waits at most for the plans to be finished."),
+                               QStringLiteral("SEC"), QStringLiteral("60"));
     parser.addOption(shotOpt);
     parser.addOption(sizeOpt);
+    parser.addOption(waitOpt);
     parser.addPositionalArgument(QStringLiteral("project"), QStringLiteral("A brief (*.abut.json)."));
     parser.process(app);
 
@@ -50,15 +54,16 @@ int main(int argc, char** argv) {
         const QStringList wh = parser.value(sizeOpt).split(QLatin1Char('x'));
         if (wh.size() == 2) window.resize(wh[0].toInt(), wh[1].toInt());
         window.show();
-        // Let the background planning finish before the picture is taken.
+        // The finished plans, not a computation under way, go in the picture.
+        bool waitOk = false;
+        const double wait = parser.value(waitOpt).toDouble(&waitOk);
+        if (!waitOk || !(wait >= 0) || wait > 86400) {
+            std::cerr << "abut: --wait takes a number of seconds from 0 to 86400\n";
+            return 2;
+        }
         QTimer::singleShot(300, &window, [&] {
-            QElapsedTimer waited;
-            waited.start();
-            while ((window.planning() || window.checking()) && waited.elapsed() < 60000) QApplication::processEvents(QEventLoop::AllEvents, 50);
-            QApplication::processEvents();
-            window.sketchView()->fitAll();
             const QString out = parser.value(shotOpt);
-            if (!window.grab().save(out)) {
+            if (!window.screenshot(out, wait)) {
                 std::cerr << "abut: cannot write " << out.toStdString() << "\n";
                 QApplication::exit(2);
                 return;

@@ -22,6 +22,7 @@
 #include <QAction>
 #include <QActionGroup>
 #include <QApplication>
+#include <QElapsedTimer>
 #include <QCloseEvent>
 #include <QDockWidget>
 #include <QFileDialog>
@@ -114,6 +115,7 @@ MainWindow::MainWindow(const MainWindowOptions& options, QWidget* parent)
     connect(doc_, &Document::pathChanged, this, &MainWindow::updateTitle);
     connect(sketch_, &SketchView::addRoomRequested, this, &MainWindow::addRoomAt);
     connect(sketch_, &SketchView::roomActivated, panel_, &BriefPanel::editRoomName);
+    connect(sketch_, &SketchView::renameRequested, this, &MainWindow::renameRoom);
     connect(sketch_, &SketchView::message, this, &MainWindow::status);
     connect(panel_, &BriefPanel::message, this, &MainWindow::status);
     connect(sketch_, &SketchView::selectionChangedByUser, this,
@@ -820,11 +822,26 @@ void MainWindow::addRoomAt(const QPointF& sketchPos) {
         status(QString::fromStdString(r.message));
         return;
     }
-    doc_->edit(tr("Add room %1").arg(name), b);
     const QString id = QString::fromStdString(room.id);
+    // The name typed next belongs to the same undo step as the room.
+    const QString key = QStringLiteral("add-room:") + id;
+    doc_->edit(tr("Add room %1").arg(name), b, key);
     sketch_->selectItems({id}, {});
     panel_->selectItems({id}, {});
-    status(tr("Added %1. Type its name in the brief table; C draws adjacencies.").arg(name));
+    sketch_->editRoomName(id, key);
+    status(tr("Added %1: type its name, Enter to keep it; C draws adjacencies.").arg(name));
+}
+
+void MainWindow::renameRoom(const QString& id, const QString& name, const QString& mergeKey) {
+    Brief b = doc_->brief();
+    const int index = b.roomIndex(id.toStdString());
+    if (index < 0) return;
+    const EditResult r = setRoomField(b, index, RoomField::Name, name.toStdString());
+    if (!r.ok()) {
+        status(QString::fromStdString(r.message));
+        return;
+    }
+    doc_->edit(tr("Rename room to %1").arg(name), b, mergeKey);
 }
 
 void MainWindow::deleteSelection() {
@@ -890,6 +907,17 @@ void MainWindow::showAbout() {
         tr("<h3>Abut %1</h3><p>Rectangular floorplans from adjacency briefs.</p>"
            "<p><b>Caution.</b> %2</p>")
             .arg(QStringLiteral(ABUT_VERSION), QString::fromUtf8(safetyCaution)));
+}
+
+bool MainWindow::screenshot(const QString& path, double waitSeconds) {
+    QElapsedTimer waited;
+    waited.start();
+    // Planning starts after a short delay; wait for it to start and end.
+    while ((planning() || checking()) && waited.elapsed() < qint64(1000 * waitSeconds))
+        QApplication::processEvents(QEventLoop::AllEvents, 50);
+    QApplication::processEvents();
+    sketch_->fitAll();
+    return grab().save(path);
 }
 
 } // namespace abut::gui

@@ -81,6 +81,10 @@ public slots:
     void showAbout();
     void tidyUp();
     void addRoomAt(const QPointF& sketchPos);
+    // The window as a PNG once the plans and the check are done (at most
+    // `waitSeconds`): what --screenshot writes. False when it cannot be written.
+    bool screenshot(const QString& path, double waitSeconds);
+    void renameRoom(const QString& id, const QString& name, const QString& mergeKey);
     void deleteSelection();
     void toggleKind();
     void togglePriority();

@@ -9,6 +9,7 @@
 #include <QGraphicsLineItem>
 #include <QGraphicsScene>
 #include <QGraphicsSimpleTextItem>
+#include <QLineEdit>
 #include <QMenu>
 #include <QScrollBar>
 #include <QStyleOptionGraphicsItem>
@@ -253,7 +254,6 @@ void SketchView::rebuild() {
     }
     applyMarks();
     rebuilding_ = false;
-    if (autoFit_) fitAll();
 }
 
 void SketchView::setHoverRoom(const QString& id) {
@@ -344,7 +344,13 @@ QPointF SketchView::centreInSketch() const {
 void SketchView::fitAll() {
     autoFit_ = true;
     const QRectF r = scene()->itemsBoundingRect().adjusted(-30, -30, 30, 30);
-    if (!r.isEmpty()) fitInView(r, Qt::KeepAspectRatio);
+    if (r.isEmpty()) return;
+    fitInView(r, Qt::KeepAspectRatio);
+    // A sketch of a room or two is not blown up: at most twice the natural size.
+    if (transform().m11() > 2.0) {
+        setTransform(QTransform::fromScale(2.0, 2.0));
+        centerOn(r.center());
+    }
 }
 
 void SketchView::zoomBy(double factor) {
@@ -472,11 +478,52 @@ void SketchView::nudge(double dx, double dy) {
 void SketchView::mouseDoubleClickEvent(QMouseEvent* event) {
     if (event->button() != Qt::LeftButton) return;
     if (RoomItem* r = roomAt(event->position().toPoint())) {
-        emit roomActivated(r->id);
+        editRoomName(r->id);
         return;
     }
+    autoFit_ = false; // the planner placed it: the view stays where it is
     const QPointF s = mapToScene(event->position().toPoint());
     emit addRoomRequested(QPointF(s.x(), -s.y()));
+}
+
+void SketchView::editRoomName(const QString& id, const QString& mergeKey) {
+    if (!doc_) return;
+    const int index = doc_->brief().roomIndex(id.toStdString());
+    if (index < 0) return;
+    if (nameEditor_) nameEditor_->deleteLater();
+    auto* editor = new QLineEdit(viewport());
+    nameEditor_ = editor;
+    editor->setObjectName(QStringLiteral("roomNameEditor"));
+    editor->setText(QString::fromStdString(doc_->brief().rooms[index].displayName()));
+    editor->selectAll();
+    const QFontMetrics fm(editor->font());
+    const int w = std::max(140, fm.horizontalAdvance(editor->text()) + 30), h = fm.height() + 10;
+    const QPoint c = mapFromScene(roomScenePos(id));
+    editor->setGeometry(c.x() - w / 2, c.y() - h / 2, w, h);
+    editor->installEventFilter(this);
+    // Enter or leaving the field keeps the name; Esc (see eventFilter) keeps the old one.
+    connect(editor, &QLineEdit::editingFinished, this, [this, editor, id, mergeKey] {
+        if (nameEditor_ != editor) return;
+        nameEditor_ = nullptr;
+        const QString name = editor->text().trimmed();
+        editor->deleteLater();
+        if (!name.isEmpty()) emit renameRequested(id, name, mergeKey);
+        setFocus();
+    });
+    editor->show();
+    editor->setFocus();
+}
+
+bool SketchView::eventFilter(QObject* watched, QEvent* event) {
+    if (watched == nameEditor_ && event->type() == QEvent::KeyPress &&
+        static_cast<QKeyEvent*>(event)->key() == Qt::Key_Escape) {
+        QLineEdit* editor = nameEditor_;
+        nameEditor_ = nullptr; // editingFinished from losing focus now does nothing
+        editor->deleteLater();
+        setFocus();
+        return true;
+    }
+    return QGraphicsView::eventFilter(watched, event);
 }
 
 void SketchView::keyPressEvent(QKeyEvent* event) {
@@ -491,6 +538,9 @@ void SketchView::keyPressEvent(QKeyEvent* event) {
             return;
         }
         break;
+    case Qt::Key_F2:
+        if (selectedRooms().size() == 1) editRoomName(selectedRooms().front());
+        return;
     case Qt::Key_Escape:
         if (connectMode_) setConnectMode(false);
         else scene()->clearSelection();

@@ -3,12 +3,14 @@
 #include "brief/brief.h"
 
 #include <QGraphicsView>
+#include <QLineEdit>
 #include <QPointer>
 
 #include <set>
 #include <vector>
 
 class QGraphicsLineItem;
+
 
 namespace abut::gui {
 
@@ -30,7 +32,13 @@ struct SketchMarks {
 // check get a dotted ring (rooms) or a wide dotted band (adjacencies) and
 // crossings a small ×.
 //
-// Mouse: double-click on empty canvas adds a room; drag a room to move it
+// The view moves only when the planner pans, zooms, fits (Ctrl+0), tidies
+// up or opens a file: adding a room puts it where the double-click was and
+// leaves the view as it is.
+//
+// Mouse: double-click on empty canvas adds a room and opens its name for
+// typing (Enter keeps it, Esc keeps the default); double-click on a room or
+// F2 renames it in place; drag a room to move it
 // (all selected rooms move; one undo step per drag); drag on empty canvas
 // selects with a rubber band; in connect mode (key C) drag from one room to
 // another to add an adjacency; middle button or Space+drag pans; wheel
@@ -44,6 +52,10 @@ public:
 
     void fitAll();
     void zoomBy(double factor);
+    // Opens an editor for the room's name on its bubble. `mergeKey` (the
+    // room's addition) makes the name part of that one undo step.
+    void editRoomName(const QString& id, const QString& mergeKey = {});
+    bool editingName() const { return nameEditor_ != nullptr; }
     bool connectMode() const { return connectMode_; }
     void setConnectMode(bool on);
 
@@ -68,6 +80,7 @@ signals:
     void selectionChangedByUser(const QStringList& rooms, const QList<int>& adjacencies);
     void addRoomRequested(const QPointF& sketchPos);
     void roomActivated(const QString& id);
+    void renameRequested(const QString& id, const QString& name, const QString& mergeKey);
     void connectModeChanged(bool on);
     void message(const QString& text);
     void roomHovered(const QString& id); // "" when the pointer leaves rooms
@@ -82,6 +95,7 @@ protected:
     void wheelEvent(QWheelEvent* event) override;
     void resizeEvent(QResizeEvent* event) override;
     void contextMenuEvent(QContextMenuEvent* event) override;
+    bool eventFilter(QObject* watched, QEvent* event) override;
 
 private:
     void rebuild();
@@ -95,7 +109,8 @@ private:
     std::vector<AdjacencyItem*> adjacencies_; // brief order
     std::vector<QGraphicsItem*> crossingMarks_;
     SketchMarks marks_;
-    bool autoFit_ = true;      // keep fitting the whole sketch until the user zooms or pans
+    bool autoFit_ = true;      // re-fit on resize until the planner zooms, pans or adds a room
+    QPointer<QLineEdit> nameEditor_; // the in-place name editor, while open
     bool connectMode_ = false;
     bool rebuilding_ = false;
     bool spaceHeld_ = false;

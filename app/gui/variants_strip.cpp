@@ -219,4 +219,6 @@ QStringList VariantsStrip::shownKeys() const {
     return out;
 }
 
+bool VariantsStrip::progressShown() const { return progress_ && progress_->isVisible(); }
+
 } // namespace abut::gui

@@ -29,6 +29,7 @@ public:
     // The brief (names, pins, hidden) and the variants, best first.
     void setVariants(const Brief& brief, const Footprint& footprint, const std::vector<PlanVariant>& variants);
     void setProgress(int permille, const QString& step, bool running);
+    bool progressShown() const;
     void selectKey(const QString& key);
 
     QString currentKey() const;

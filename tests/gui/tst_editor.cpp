@@ -116,6 +116,76 @@ private slots:
         w.ask = [](auto&&...) { return QMessageBox::Discard; };
     }
 
+    // A double-click puts the room where it was clicked and leaves the view
+    // alone: the transform and the scroll position stay, so the next
+    // double-click lands where the planner means it.
+    void roomsStayWhereTheyArePut() {
+        MainWindow w(options());
+        w.resize(1200, 800);
+        w.show();
+        QVERIFY(QTest::qWaitForWindowExposed(&w));
+        SketchView* view = w.sketchView();
+        QWidget* vp = view->viewport();
+        const QTransform before = view->viewportTransform();
+        const QList<QPoint> clicks{QPoint(60, 50), QPoint(300, 120), QPoint(180, 330)};
+        for (int k = 0; k < clicks.size(); ++k) {
+            QTest::mouseDClick(vp, Qt::LeftButton, {}, clicks[k]);
+            QCOMPARE(w.brief().rooms.size(), std::size_t(k + 1));
+            QTest::keyClick(QApplication::focusWidget(), Qt::Key_Escape); // keep the default name
+            QCOMPARE(view->viewportTransform(), before);
+            const QPoint at = onScreen(w, QString::fromStdString(w.brief().rooms[k].id));
+            QVERIFY2((at - clicks[k]).manhattanLength() <= 2,
+                     qPrintable(QString("room %1 at (%2, %3)").arg(k).arg(at.x()).arg(at.y())));
+        }
+        // A 12 m² room is a modest bubble at the default zoom: under a fifth of
+        // the view wide (its disc is 2 × 10·√(12/π) ≈ 39 sketch units across).
+        QVERIFY(2 * 10 * std::sqrt(12 / M_PI) * view->transform().m11() < vp->width() / 5.0);
+        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+    }
+
+    // Typing right after the double-click names the room; the room and its
+    // name are one undo step. F2 renames the selected room, one step more.
+    void nameTypedInPlace() {
+        MainWindow w(options());
+        w.resize(1200, 800);
+        w.show();
+        QVERIFY(QTest::qWaitForWindowExposed(&w));
+        QWidget* vp = w.sketchView()->viewport();
+        QTest::mouseDClick(vp, Qt::LeftButton, {}, QPoint(200, 200));
+        QVERIFY(w.sketchView()->editingName());
+        QWidget* editor = QApplication::focusWidget();
+        QVERIFY(qobject_cast<QLineEdit*>(editor));
+        QTest::keyClicks(editor, QStringLiteral("Pantry"));
+        QTest::keyClick(editor, Qt::Key_Return);
+        QCOMPARE(w.brief().rooms.size(), std::size_t(1));
+        QCOMPARE(w.brief().rooms[0].name, std::string("Pantry"));
+        QUndoStack* undo = w.document()->undoStack();
+        QCOMPARE(undo->count(), 1);
+        // F2 on the selected room: a new name, its own step.
+        const QString id = QString::fromStdString(w.brief().rooms[0].id);
+        w.sketchView()->selectItems({id}, {});
+        w.sketchView()->setFocus();
+        QTest::keyClick(w.sketchView(), Qt::Key_F2);
+        QVERIFY(w.sketchView()->editingName());
+        editor = QApplication::focusWidget();
+        QTest::keyClicks(editor, QStringLiteral("Larder"));
+        QTest::keyClick(editor, Qt::Key_Return);
+        QCOMPARE(w.brief().rooms[0].name, std::string("Larder"));
+        QCOMPARE(undo->count(), 2);
+        undo->undo();
+        QCOMPARE(w.brief().rooms[0].name, std::string("Pantry"));
+        undo->undo(); // one step removes the room with its name
+        QVERIFY(w.brief().rooms.empty());
+        // Esc keeps the default name; a control character is refused, the name kept.
+        QTest::mouseDClick(vp, Qt::LeftButton, {}, QPoint(300, 260));
+        QTest::keyClicks(QApplication::focusWidget(), QStringLiteral("Studio"));
+        QTest::keyClick(QApplication::focusWidget(), Qt::Key_Escape);
+        QCOMPARE(w.brief().rooms.size(), std::size_t(1));
+        QCOMPARE(w.brief().rooms[0].name, std::string("Room 1"));
+        QVERIFY(!w.sketchView()->editingName());
+        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+    }
+
     void dragMovesRoomsInOneStep() {
         MainWindow w(options());
         w.resize(1200, 800);

@@ -17,6 +17,8 @@
 #include <QListWidget>
 #include <QPushButton>
 #include <QTableWidget>
+#include <QFileInfo>
+#include <QStatusBar>
 #include <QTemporaryDir>
 #include <QtTest>
 
@@ -102,6 +104,23 @@ private slots:
         QVERIFY(!w.variantsStrip()->shownKeys().isEmpty());
         QVERIFY(ticks > 10);
         QVERIFY2(worst <= 50, qPrintable(QString("the UI thread stalled %1 ms").arg(worst)));
+    }
+
+    // The screenshot shows the finished plans: no progress bar, no
+    // "Computing" in the status bar (read from the window, not the pixels).
+    void screenshotWaitsForTheFinishedPlans() {
+        const auto window = windowOn(options(), "clinic");
+        QVERIFY(window);
+        MainWindow& w = *window;
+        QTemporaryDir dir;
+        const QString png = dir.filePath(QStringLiteral("clinic.png"));
+        QVERIFY(w.screenshot(png, 60));
+        QVERIFY(QFileInfo(png).size() > 0);
+        QVERIFY(!w.planning());
+        QVERIFY(w.hasCurrentVariant());
+        QVERIFY(!w.variantsStrip()->progressShown());
+        const QString status = w.statusBar()->currentMessage();
+        QVERIFY2(!status.contains(QStringLiteral("Computing")), qPrintable(status));
     }
 
     void cancelStopsPromptly() {
