@@ -191,6 +191,10 @@ SketchView::SketchView(QWidget* parent) : QGraphicsView(parent) {
     setDragMode(QGraphicsView::RubberBandDrag);
     setBackgroundBrush(QColor(0xFB, 0xFA, 0xF7));
     setTransformationAnchor(QGraphicsView::AnchorUnderMouse);
+    // Panning is by the middle button or Space+drag. Scroll bars that come and
+    // go change the viewport, which re-fits it, which brings them back: off.
+    setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
+    setVerticalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
     setFocusPolicy(Qt::StrongFocus);
     viewport()->setMouseTracking(true);
     setToolTip(tr("Adjacency sketch: solid line = door, dashed = wall; thick = must, thin = should.\n"
@@ -345,12 +349,14 @@ void SketchView::fitAll() {
     autoFit_ = true;
     const QRectF r = scene()->itemsBoundingRect().adjusted(-30, -30, 30, 30);
     if (r.isEmpty()) return;
-    fitInView(r, Qt::KeepAspectRatio);
-    // A sketch of a room or two is not blown up: at most twice the natural size.
-    if (transform().m11() > 2.0) {
-        setTransform(QTransform::fromScale(2.0, 2.0));
-        centerOn(r.center());
-    }
+    // The whole sketch in the viewport, but a room or two is not blown up: at
+    // most twice the natural size. Never more than fits, so that no scroll
+    // bar appears (one appearing and leaving would re-fit without end).
+    const QRectF vp = viewport()->rect().adjusted(2, 2, -2, -2);
+    const double k = std::min({vp.width() / r.width(), vp.height() / r.height(), 2.0});
+    if (!(k > 0)) return;
+    setTransform(QTransform::fromScale(k, k));
+    centerOn(r.center());
 }
 
 void SketchView::zoomBy(double factor) {
