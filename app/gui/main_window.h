@@ -32,7 +32,7 @@ struct MainWindowOptions {
     QString recoveryFolder;      // empty: Recovery::defaultFolder()
     int autosaveSeconds = 60;    // 0: no autosave timer (autosaveNow() still works)
     int checkDelayMs = 150;      // live check after the last edit
-    int planDelayMs = 600;       // plan computation after the last edit
+    int planDelayMs = 250;       // plan computation after the last edit (the first plan shows within 0.5 s)
 };
 
 class MainWindow : public QMainWindow {
