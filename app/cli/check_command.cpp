@@ -5,6 +5,7 @@
 #include "brief/footprint_check.h"
 #include "io/project_io.h"
 
+#include <algorithm>
 #include <cmath>
 #include <iomanip>
 #include <sstream>
@@ -64,7 +65,8 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     }
     // Targets over the footprint, or rooms wider than it: reported first, and no plan can meet them.
     std::vector<Diagnostic> diagnostics = footprintProblems(brief);
-    const bool fits = diagnostics.empty();
+    const bool fits = std::none_of(diagnostics.begin(), diagnostics.end(),
+                                   [](const Diagnostic& d) { return d.severity == Severity::Error; });
     diagnostics.insert(diagnostics.end(), plan.diagnostics.begin(), plan.diagnostics.end());
     // No rooms, no plan: `plan` says so too.
     const int code =

@@ -1,6 +1,7 @@
 #include "brief/footprint_check.h"
 
 #include <algorithm>
+#include <cmath>
 #include <sstream>
 
 namespace abut {
@@ -41,6 +42,32 @@ std::vector<Diagnostic> footprintProblems(const Brief& brief) {
             d.rooms = {static_cast<int>(i)};
             out.push_back(d);
         }
+    }
+    // Rooms that wish one side only all need a stretch of that facade at
+    // least their minimum width long (a room wider than its minimum on the
+    // facade is fine; narrower is not).
+    for (Side side : allSides) {
+        const double length = (side == Side::N || side == Side::S) ? fp.width : fp.depth;
+        double need = 0;
+        std::vector<int> rooms;
+        for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
+            const Room& room = brief.rooms[i];
+            if (room.facade.anySide || room.facade.sides != (1u << static_cast<unsigned>(side)) || !room.minWidth)
+                continue;
+            need += *room.minWidth;
+            rooms.push_back(static_cast<int>(i));
+        }
+        if (need <= length * (1 + 1e-9)) continue;
+        static const char* names[] = {"north", "east", "south", "west"};
+        Diagnostic d;
+        d.severity = Severity::Warning;
+        d.code = "facade-too-short";
+        d.message = "The " + std::to_string(rooms.size()) + " rooms that wish the " + names[static_cast<int>(side)] +
+                    " facade alone need " + formatNumber(need) + " " + u + " of it at their minimum widths; the facade is " +
+                    formatNumber(length) + " " + u + ": lengthen it by " + formatNumber(std::ceil((need - length) * 100 - 1e-6) / 100) +
+                    " " + u + ", narrow some rooms' minimum widths, or let some rooms take another side.";
+        d.rooms = rooms;
+        out.push_back(d);
     }
     return out;
 }

@@ -12,7 +12,9 @@
 
 namespace abut {
 
-// Error diagnostics, codes "over-footprint" and "wider-than-footprint".
+// Error diagnostics, codes "over-footprint" and "wider-than-footprint"; a
+// warning "facade-too-short" when the rooms that wish one side alone need
+// more of it at their minimum widths than it is long.
 std::vector<Diagnostic> footprintProblems(const Brief& brief);
 
 } // namespace abut

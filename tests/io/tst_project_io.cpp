@@ -64,6 +64,7 @@ private slots:
     void folderGivenAsProjectIsNamed();
     void specialOutputPaths();
     void exactFillIsNotOverTheFootprint();
+    void facadeTooShortForItsRooms();
 };
 
 void TestProjectIo::validFileLoads_data() {
@@ -402,6 +403,43 @@ void TestProjectIo::exactFillIsNotOverTheFootprint() {
     QVERIFY(footprintProblems(b).empty());
     b.rooms.back().area += 1e-6 * total;
     QVERIFY(!footprintProblems(b).empty());
+}
+
+// Sixteen rooms of 2.7 m minimum width that wish the north facade alone need
+// 16 × 2.7 = 43.2 m of it; a 40 m facade is 3.2 m short. Rooms that may take
+// another side too do not count. (Arithmetic; the widths are common practice
+// for small offices, no source.)
+void TestProjectIo::facadeTooShortForItsRooms() {
+    Brief b;
+    b.footprint = Footprint{40, 18};
+    for (int i = 0; i < 18; ++i) {
+        Room r;
+        r.id = "o" + std::to_string(i);
+        r.area = 14;
+        r.minWidth = 2.7;
+        r.facade.add(i < 16 ? Side::N : Side::S);
+        b.rooms.push_back(r);
+    }
+    auto shortFacade = [](const Brief& brief) {
+        std::vector<Diagnostic> out;
+        for (const Diagnostic& d : footprintProblems(brief))
+            if (d.code == "facade-too-short") out.push_back(d);
+        return out;
+    };
+    std::vector<Diagnostic> d = shortFacade(b);
+    QCOMPARE(d.size(), std::size_t(1));
+    QCOMPARE(d[0].severity, Severity::Warning);
+    QCOMPARE(d[0].rooms.size(), std::size_t(16));
+    const QString m = QString::fromStdString(d[0].message);
+    QVERIFY2(m.contains("16 rooms that wish the north facade alone need 43.2 m") && m.contains("the facade is 40 m") &&
+                 m.contains("lengthen it by 3.2 m"),
+             qPrintable(m));
+    b.rooms[15].facade.add(Side::E); // may take the east side too: 15 × 2.7 = 40.5 m
+    d = shortFacade(b);
+    QCOMPARE(d.size(), std::size_t(1));
+    QVERIFY(QString::fromStdString(d[0].message).contains("lengthen it by 0.5 m"));
+    b.rooms[14].facade.add(Side::E); // 14 × 2.7 = 37.8 m: fits
+    QVERIFY(shortFacade(b).empty());
 }
 
 QTEST_GUILESS_MAIN(TestProjectIo)
