@@ -109,6 +109,11 @@ int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostrea
         out << "  The best variant does not meet " << unmet.size() << " requirement(s):\n";
         for (std::size_t k = 0; k < unmet.size() && k < 20; ++k) out << "    " << unmet[k].text << "\n";
         if (unmet.size() > 20) out << "    and " << unmet.size() - 20 << " more (see \"unmet\" in the plan file)\n";
+        const std::vector<Relaxation>& give = plan.variants.front().relaxations;
+        if (!give.empty()) {
+            out << "  What would meet them (one change each, checked by sizing the plan again):\n";
+            for (const Relaxation& r : give) out << "    " << r.text << "  \u2192 meets: " << r.meets << "\n";
+        }
     }
     return exitOk;
 }

@@ -1,5 +1,7 @@
 #include "main_window.h"
 
+#include "plan/unmet.h"
+
 #include "brief/brief_edit.h"
 #include "brief_panel.h"
 #include "caution.h"
@@ -95,7 +97,8 @@ MainWindow::MainWindow(const MainWindowOptions& options, QWidget* parent)
     diagnostics_ = new QListWidget(this);
     diagnostics_->setObjectName(QStringLiteral("diagnostics"));
     diagnostics_->setWordWrap(true);
-    diagnostics_->setToolTip(tr("What the live check found. Click an entry to select the rooms it names."));
+    diagnostics_->setToolTip(tr("What the live check found, what the plan on show does not meet and what would "
+                                "meet it. Click an entry to select the rooms it names."));
     auto* diagDock = new QDockWidget(tr("Diagnostics"), this);
     diagDock->setObjectName(QStringLiteral("diagnosticsDock"));
     diagDock->setWidget(diagnostics_);
@@ -609,8 +612,26 @@ void MainWindow::checkReady() {
     if (c.revision != doc_->revision()) return; // stale: a newer check is queued
     check_ = std::move(c);
     sketch_->setMarks(check_.marks);
+    showDiagnostics();
+}
+
+void MainWindow::showDiagnostics() {
     diagnostics_->clear();
-    for (const Diagnostic& d : check_.diagnostics) {
+    std::vector<Diagnostic> all = check_.diagnostics;
+    // The plan on show: what it does not meet, and what would meet it.
+    if (haveCurrent_ && current_.rooms.size() == planBrief_.rooms.size() && planBrief_.rooms.size() == brief().rooms.size()) {
+        for (const UnmetItem& u : unmetRequirements(planBrief_, planFootprint_, current_)) {
+            Diagnostic d{Severity::Warning, "unmet", tr("Not met in the plan on show: %1").arg(QString::fromStdString(u.text)).toStdString(),
+                         u.rooms, {}};
+            if (u.adjacency >= 0) d.adjacencies = {u.adjacency};
+            all.push_back(d);
+        }
+        for (const Relaxation& r : current_.relaxations)
+            all.push_back({Severity::Info, "relaxation",
+                           tr("Would meet \u201c%1\u201d: %2").arg(QString::fromStdString(r.meets), QString::fromStdString(r.text)).toStdString(),
+                           {}, {}});
+    }
+    for (const Diagnostic& d : all) {
         const QString prefix = d.severity == Severity::Error     ? tr("Problem: ")
                                : d.severity == Severity::Warning ? tr("Warning: ")
                                                                  : QString();
@@ -714,6 +735,7 @@ void MainWindow::showCurrent() {
     planView_->setVariant(planBrief_, planFootprint_, current_);
     schedule_->setVariant(planBrief_, planFootprint_, current_);
     strip_->selectKey(QString::fromStdString(variantKey(planBrief_, current_)));
+    showDiagnostics();
 }
 
 void MainWindow::wallMoved(const PlanVariant& resized, const QString& description) {

@@ -104,6 +104,7 @@ private:
     void fillRecentMenu();
     void briefChanged();
     void startCheck();
+    void showDiagnostics(); // the live check's findings and the plan on show's misses
     void checkReady();
     void startPlanning();
     void variantFound(const PlanVariant& v, quint64 revision);

@@ -62,6 +62,22 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
             notMet.push_back(item);
         }
         vj["unmet"] = notMet;
+        // What must give (worked out for the best variant).
+        OrderedJson give = OrderedJson::array();
+        for (const Relaxation& r : v.relaxations) {
+            OrderedJson item = {{"field", r.field}};
+            for (const auto& [key, text] : {std::pair{"current", &r.current}, std::pair{"suggested", &r.suggested}}) {
+                try {
+                    item[key] = OrderedJson::parse(*text);
+                } catch (const nlohmann::json::exception&) {
+                    item[key] = *text;
+                }
+            }
+            item["text"] = r.text;
+            item["meets"] = r.meets;
+            give.push_back(item);
+        }
+        vj["relaxations"] = give;
         vj["oneSided"] = v.oneSided;
         vj["usable"] = v.misses.usable();
         vj["metrics"] = {{"worstAreaError", tidy(v.metrics.worstAreaError)},

@@ -24,6 +24,16 @@ struct PlanMetrics {
     double spareArea = 0;        // total area of spare spaces
 };
 
+// A change to the brief that would meet one requirement a variant misses
+// (plan/relaxations.h finds and verifies them).
+struct Relaxation {
+    std::string field;              // the project field it changes, as a JSON Pointer
+    std::string current, suggested; // JSON values
+    std::string text;               // one line in the planner's words
+    std::string meets;              // the requirement it meets (an UnmetItem's text)
+    double change = 0;              // relative size of the change (for ranking; giving up counts 1)
+};
+
 struct PlanVariant {
     int rank = 1;
     double score = 0;
@@ -35,6 +45,7 @@ struct PlanVariant {
     bool sized = false;           // segment positions chosen by the sizer (not just fitted)
     std::vector<UnmetRequirement> unmet; // what the sizer could not meet, and by how much
     RequirementMisses misses;            // what keeps it from being usable (none: usable)
+    std::vector<Relaxation> relaxations; // what must give (the best variant only; see plan/relaxations.h)
     PlanMetrics metrics;
     // The combinatorial layout the rectangles come from (for sizing and dragging).
     ExtendedGraph extended;

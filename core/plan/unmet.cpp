@@ -51,8 +51,8 @@ std::vector<UnmetItem> unmetRequirements(const Brief& brief, const Footprint& fp
                                " " + u});
         if (room.maxAspect && shortSide > 0 && longSide / shortSide > *room.maxAspect + 1e-6)
             out.push_back({"maxAspect", at + "/maxAspect", {i}, -1, *room.maxAspect, longSide / shortSide,
-                           name + ": proportions 1:" + number(longSide / shortSide, 1) + ", limit 1:" +
-                               number(*room.maxAspect, 1)});
+                           name + ": proportions 1:" + number(longSide / shortSide, 2) + ", limit 1:" +
+                               number(*room.maxAspect, 2)});
         if (!room.facade.empty()) {
             const double tol = 1e-9 * std::max(fp.width, fp.depth);
             std::string missed;

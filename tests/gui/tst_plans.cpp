@@ -123,6 +123,28 @@ private slots:
         QVERIFY2(!status.contains(QStringLiteral("Computing")), qPrintable(status));
     }
 
+    // The diagnostics list says what the plan on show does not meet (the
+    // studio's four rooms cannot all touch) and what would meet it; a click
+    // on the entry selects the rooms it names.
+    void diagnosticsListWhatThePlanMisses() {
+        const auto window = windowOn(options(), "four-way-studio");
+        QVERIFY(window);
+        MainWindow& w = *window;
+        waitForPlans(w);
+        QTRY_VERIFY(!w.checking());
+        QListWidgetItem* notMet = nullptr;
+        bool wouldMeet = false;
+        for (int k = 0; k < w.diagnosticsList()->count(); ++k) {
+            QListWidgetItem* item = w.diagnosticsList()->item(k);
+            if (item->text().contains(QStringLiteral("Not met in the plan on show")) && !notMet) notMet = item;
+            wouldMeet = wouldMeet || item->text().contains(QStringLiteral("make the adjacency 'should'"));
+        }
+        QVERIFY(notMet);
+        QVERIFY(wouldMeet);
+        emit w.diagnosticsList()->itemClicked(notMet);
+        QCOMPARE(w.sketchView()->selectedRooms().size(), 2);
+    }
+
     void cancelStopsPromptly() {
         MainWindow w(options());
         w.show();

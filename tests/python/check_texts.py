@@ -7,6 +7,10 @@
   'must' adjacencies and the facades;
 - the PDF sheet of a plan that drops a 'must' lists it under "Not met"
   (read back with poppler's pdftotext);
+- what must give: the clinic broken in one place (a minimum width past what
+  fits, the footprint 10 % narrower): the first relaxation in the plan file
+  names the broken field, `plan` prints it, and the brief with it applied
+  gets a plan that meets everything (judged with shapely);
 - surplus: with "spare" every room stays within its band and spare spaces
   take the rest of the footprint; with "spread" every room grows in
   proportion (about 10 % here) and no spare space is left (areas measured
@@ -98,6 +102,41 @@ with tempfile.TemporaryDirectory() as tmp:
             expect(spare >= 110 - total * 1.05 - 1e-6, f"spare: spare spaces {spare:.2f} hold what the bands leave")
         else:
             expect(spare < 1e-6, f"spread: no spare space ({spare:.2f})")
+
+    # What must give: the clinic sample (read off a drawn plan, so exactly
+    # solvable) broken in one place; the first relaxation offered names the
+    # broken field, and the brief with it applied gets a usable plan.
+    clinic = json.load(open(os.path.join(samples, "clinic.abut.json")))
+    ids = [x["id"] for x in clinic["rooms"]]
+    broken = {
+        "a minimum width past what fits": ("/rooms/%d/minWidth" % ids.index("consult1"),
+                                           lambda b: b["rooms"][ids.index("consult1")].update(minWidth=5.5)),
+        "the footprint 10 % narrower": ("/footprint/width", lambda b: b["footprint"].update(width=19.8)),
+    }
+    for what, (field, breakIt) in broken.items():
+        b = json.loads(json.dumps(clinic))
+        breakIt(b)
+        path = os.path.join(tmp, "broken.abut.json")
+        json.dump(b, open(path, "w"))
+        out = os.path.join(tmp, "broken.plan.json")
+        r = run("plan", path, "-o", out, "--time-limit", "10", "--threads", "1")
+        expect(r.returncode == 0, f"{what}: plan exit {r.returncode}")
+        give = json.load(open(out))["variants"][0]["relaxations"]
+        expect(give and give[0]["field"] == field, f"{what}: first relaxation {give[:1]} should name {field}")
+        if not give:
+            continue
+        expect(give[0]["text"] in r.stdout, f"{what}: plan prints the relaxation")
+        # Apply it: the JSON Pointer's last step is the field, the one before its object.
+        parts = give[0]["field"].strip("/").split("/")
+        target = b
+        for p in parts[:-1]:
+            target = target[int(p)] if isinstance(target, list) else target[p]
+        target[parts[-1]] = give[0]["suggested"]
+        json.dump(b, open(path, "w"))
+        r = run("plan", path, "-o", out, "--time-limit", "20", "--threads", "1")
+        rooms_, spaces_ = plan_quality.plan_rooms(json.load(open(out))["variants"][0])
+        miss = plan_quality.misses(b, rooms_, spaces_)
+        expect(not miss, f"{what}: with {give[0]['text']!r} applied the plan still misses {miss[:3]}")
 
 print(f"{len(failures)} failure(s)")
 sys.exit(1 if failures else 0)
