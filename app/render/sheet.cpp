@@ -42,13 +42,14 @@ QFont fontMm(double sizeMm, double dpmm, bool bold = false) {
 } // namespace
 
 int chooseScale(double widthMm, double depthMm, double boxW, double boxH) {
-    for (int denom : {20, 50, 100, 200, 500, 1000, 2000})
+    // ISO 5455 scales plus 1:250, common practice for building plans (no source).
+    for (int denom : {20, 50, 100, 200, 250, 500, 1000, 2000})
         if (widthMm / denom <= boxW && depthMm / denom <= boxH) return denom;
     return 5000;
 }
 
 double paintPlan(QPainter& p, const QRectF& target, const Brief& brief, const Footprint& fp, const PlanVariant& v,
-                 double fixedScale) {
+                 double fixedScale, double minTextPx) {
     const double s = fixedScale > 0 ? fixedScale : std::min(target.width() / fp.width, target.height() / fp.depth);
     const QPointF origin(target.left() + (target.width() - fp.width * s) / 2,
                          target.top() + (target.height() - fp.depth * s) / 2);
@@ -71,24 +72,33 @@ double paintPlan(QPainter& p, const QRectF& target, const Brief& brief, const Fo
     p.drawRect(toDevice(Rect{0, 0, fp.width, fp.depth}));
     // Labels: name over area, sized to the room.
     p.setPen(QColor(0x11, 0x11, 0x11));
+    const double metre = 1000.0 / mmPerUnit(brief.units); // plan units per metre
     for (std::size_t i = 0; i < v.rooms.size(); ++i) {
         const QRectF box = toDevice(v.rooms[i]).adjusted(line * 2, line * 2, -line * 2, -line * 2);
-        const QString name = QString::fromStdString(brief.rooms[i].displayName());
-        double px = std::min(box.height() / 3.2, 0.45 * s);
+        QString name = QString::fromStdString(brief.rooms[i].displayName());
+        double px = std::max(minTextPx, std::min(box.height() / 3.2, 0.45 * metre * s));
         QFont f = plainFont();
         f.setPixelSize(std::max(1, static_cast<int>(px)));
         QFontMetricsF fm(f);
-        while (px > 2 && fm.horizontalAdvance(name) > box.width()) {
-            px *= 0.9;
+        while (px > std::max(2.0, minTextPx) && fm.horizontalAdvance(name) > box.width()) {
+            px = std::max(px * 0.9, minTextPx);
             f.setPixelSize(std::max(1, static_cast<int>(px)));
             fm = QFontMetricsF(f);
+        }
+        if (minTextPx > 0 && (fm.horizontalAdvance(name) > box.width() || 2.2 * fm.height() > box.height())) {
+            // Too small for its name at the smallest legible size: its number.
+            px = minTextPx;
+            f.setPixelSize(std::max(1, static_cast<int>(std::ceil(px))));
+            p.setFont(f);
+            p.drawText(toDevice(v.rooms[i]), Qt::AlignCenter, QString::number(i + 1));
+            continue;
         }
         p.setFont(f);
         QRectF top = box, bottom = box;
         top.setBottom(box.center().y());
         bottom.setTop(box.center().y());
         p.drawText(top, Qt::AlignHCenter | Qt::AlignBottom, name);
-        f.setPixelSize(std::max(1, static_cast<int>(px * 0.85)));
+        f.setPixelSize(std::max(1, static_cast<int>(std::max(px * 0.85, minTextPx))));
         p.setFont(f);
         p.drawText(bottom, Qt::AlignHCenter | Qt::AlignTop, areaText(v.rooms[i].area(), brief.units));
     }
@@ -135,7 +145,7 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
     const QSizeF pageMm = device.pageLayout().fullRect(QPageLayout::Millimeter).size();
     auto mm = [&](double x, double y, double w, double h) { return QRectF(x * dpmm, y * dpmm, w * dpmm, h * dpmm); };
     const double W = pageMm.width(), H = pageMm.height();
-    const double margin = 10, side = std::max(100.0, W * 0.33);
+    const double margin = 10, side = std::max(100.0, W * 0.3);
     // Frame.
     p.setPen(QPen(Qt::black, 0.5 * dpmm));
     p.drawRect(mm(margin, margin, W - 2 * margin, H - 2 * margin));
@@ -148,7 +158,8 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
     const double unitMm = mmPerUnit(brief.units);
     const int denom = chooseScale(fp.width * unitMm, fp.depth * unitMm, planW - 10, planH - 10);
     const double s = unitMm / denom * dpmm; // device units per plan unit
-    paintPlan(p, mm(margin + 5, margin + 5, planW - 10, planH - 10), brief, fp, v, s);
+    // No label under 2 mm printed height; smaller rooms show their schedule number.
+    paintPlan(p, mm(margin + 5, margin + 5, planW - 10, planH - 10), brief, fp, v, s, 2.0 * dpmm);
 
     // Scale bar and north arrow under the plan.
     const double barY = H - margin - 14;
@@ -211,8 +222,10 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
         true);
     p.setPen(QPen(Qt::black, 0.2 * dpmm));
     p.drawLine(QPointF((x0 + 3) * dpmm, y * dpmm), QPointF((x0 + 3 + colW) * dpmm, y * dpmm));
+    int number = 0;
     for (const ScheduleRow& r : sched.rows)
-        row({QString::fromStdString(r.name), QString::number(r.target, 'f', 1), QString::number(r.achieved, 'f', 1),
+        row({QString::number(++number) + QStringLiteral("  ") + QString::fromStdString(r.name),
+             QString::number(r.target, 'f', 1), QString::number(r.achieved, 'f', 1),
              QString::number(100 * r.deviation, 'f', 1),
              QString::number(r.width, 'f', 2) + QString::fromUtf8(" × ") + QString::number(r.depth, 'f', 2)},
             false);

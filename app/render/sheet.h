@@ -45,8 +45,11 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
 QImage planImage(const Brief& brief, const Footprint& footprint, const PlanVariant& v, double pixelsPerUnit);
 
 // Draws the plan into `target` (device units), keeping proportions; returns
-// the device units per plan unit used.
+// the device units per plan unit used. Labels are at most 0.45 m high on the
+// plan (feet plans alike); with `minTextPx` > 0 no label is smaller: a room
+// too small for its name at that size gets its number in the schedule
+// (brief order, from 1) instead.
 double paintPlan(QPainter& p, const QRectF& target, const Brief& brief, const Footprint& footprint,
-                 const PlanVariant& v, double fixedScale = 0);
+                 const PlanVariant& v, double fixedScale = 0, double minTextPx = 0);
 
 } // namespace abut::render

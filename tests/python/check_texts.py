@@ -11,6 +11,8 @@
   fits, the footprint 10 % narrower): the first relaxation in the plan file
   names the broken field, `plan` prints it, and the brief with it applied
   gets a plan that meets everything (judged with shapely);
+- sheets: no text under 2 mm printed height on the office floor's sheet, and
+  a feet version of it gets the same text sizes;
 - surplus: with "spare" every room stays within its band and spare spaces
   take the rest of the footprint; with "spread" every room grows in
   proportion (about 10 % here) and no spare space is left (areas measured
@@ -19,6 +21,7 @@
     /usr/bin/python3 tests/python/check_texts.py ABUT_CLI SAMPLES_DIR
 """
 import json
+import re
 import os
 import subprocess
 import sys
@@ -137,6 +140,40 @@ with tempfile.TemporaryDirectory() as tmp:
         rooms_, spaces_ = plan_quality.plan_rooms(json.load(open(out))["variants"][0])
         miss = plan_quality.misses(b, rooms_, spaces_)
         expect(not miss, f"{what}: with {give[0]['text']!r} applied the plan still misses {miss[:3]}")
+
+    # Sheets a client can read: no text under 2 mm printed height on the
+    # office floor's sheet (word boxes from poppler's pdftotext -bbox; a box
+    # is about 1.16 times the font size, DejaVu Sans' ascent plus descent, so
+    # 2 mm type gives 2.3 mm boxes); the same plan in feet gets the same text
+    # sizes (median of the plan's words within 15 %).
+    def word_heights_mm(project, name):
+        pdf = os.path.join(tmp, name + ".pdf")
+        expect(run("export", project, "-o", pdf).returncode == 0, f"{name}: export")
+        html = subprocess.run(["pdftotext", "-bbox", pdf, "-"], capture_output=True, text=True).stdout
+        boxes = re.findall(r'<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)</word>', html)
+        return [((float(y1) - float(y0)) * 25.4 / 72, float(x0) * 25.4 / 72, w) for x0, y0, x1, y1, w in boxes]
+
+    office = os.path.join(samples, "office-floor.abut.json")
+    metres = word_heights_mm(office, "office-m")
+    smallest = min(metres)
+    expect(smallest[0] >= 2.0, f"smallest text on the office floor sheet: {smallest[0]:.2f} mm ({smallest[2]!r})")
+    feet_brief = json.load(open(office))
+    ft = 1 / 0.3048  # feet per metre (exact by definition of the international foot)
+    feet_brief["units"] = "ft"
+    feet_brief["footprint"] = {k: v * ft for k, v in feet_brief["footprint"].items()}
+    feet_brief["doorWidth"] = feet_brief.get("doorWidth", 0.9) * ft
+    for room in feet_brief["rooms"]:
+        room["area"] *= ft * ft
+        if "minWidth" in room:
+            room["minWidth"] *= ft
+    feet_path = os.path.join(tmp, "office-ft.abut.json")
+    json.dump(feet_brief, open(feet_path, "w"))
+    feet = word_heights_mm(feet_path, "office-ft")
+    plan_m = sorted(h for h, x, w in metres if x < 260)  # the plan's side of the sheet
+    plan_f = sorted(h for h, x, w in feet if x < 260)
+    if plan_m and plan_f:
+        mm_, mf = plan_m[len(plan_m) // 2], plan_f[len(plan_f) // 2]
+        expect(abs(mf - mm_) <= 0.15 * mm_, f"plan text: {mm_:.2f} mm on the metre sheet, {mf:.2f} mm in feet")
 
 print(f"{len(failures)} failure(s)")
 sys.exit(1 if failures else 0)
