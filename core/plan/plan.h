@@ -95,6 +95,7 @@ struct PlanOptions {
     int improvedCandidates = 1;      // best sized variants then improved by labeling flips
     int flipBudget = 0;              // sizings per improved variant (0 = 40 + n·min(400, 8n) for n rooms)
     double grid = 0.0;               // m: planning module for walls (0 = none)
+    bool relaxations = true;         // work out what must give for the best variant (plan/relaxations.h)
 };
 
 // Score of a variant (lower is better), documented for planners:

@@ -690,10 +690,10 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
                                         " door adjacency(ies) get less than a door's width of wall in the footprint.",
                                     {}, {}});
     // What must give, for the best variant: a few re-sizings per requirement it misses.
-    // Bounded: after the time limit, at most a tenth of it more (2 s at least).
-    if (!stopped)
-        plan.variants.front().relaxations =
-            relaxationsFor(given, plan.footprint, v, 12, options.timeLimit > 0 ? std::max(2.0, 0.1 * options.timeLimit) : 0);
+    // Bounded: a tenth of the time limit (0.2 to 2 s), 1 s without one.
+    if (!stopped && options.relaxations)
+        plan.variants.front().relaxations = relaxationsFor(
+            given, plan.footprint, v, 12, options.timeLimit > 0 ? std::clamp(0.1 * options.timeLimit, 0.2, 2.0) : 1.0);
     plan.status = stopped ? PlanStatus::Cancelled : mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
     plan.summary = stopped ? "Stopped: " + std::to_string(plan.variants.size()) + " variant(s) found so far."
                    : aug.status == AugmentStatus::Compromised && !mustLost

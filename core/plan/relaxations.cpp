@@ -106,6 +106,7 @@ std::vector<Relaxation> relaxationsFor(const Brief& given, const Footprint& fp, 
         for (auto& [n, r] : global) out.push_back(std::move(r));
     }
     int tried = 0;
+    bool footprintTried = false;
     for (const UnmetItem& item : items) {
         if (static_cast<int>(out.size()) >= limit || ++tried > 8 || !inTime()) break;
         std::vector<Relaxation> found;
@@ -140,8 +141,10 @@ std::vector<Relaxation> relaxationsFor(const Brief& given, const Footprint& fp, 
                                      num(*brief.rooms[i].maxAspect),
                                  item.text, *b.rooms[i].maxAspect / *brief.rooms[i].maxAspect - 1});
         }
-        // The footprint, when the brief gives one: the smallest of a few steps.
-        if (given.footprint && item.requirement != "facade" && item.requirement != "adjacency") {
+        // The footprint, when the brief gives one: the smallest of a few steps
+        // (tried for the first requirement it could meet only: eight sizings).
+        if (given.footprint && !footprintTried && item.requirement != "facade" && item.requirement != "adjacency") {
+            footprintTried = true;
             for (const bool wide : {true, false}) {
                 for (double step : {0.02, 0.05, 0.1, 0.2}) {
                     Footprint f = fp;

@@ -183,6 +183,7 @@ void TestLabelingDual::samplesGiveValidPlans() {
     o.searchMoves = 20000;
     o.variantFlips = 3;
     o.improvedCandidates = 0;
+    o.relaxations = false;
     const Plan plan = buildPlan(l.brief, o);
     QVERIFY2(plan.status != PlanStatus::Internal, plan.summary.c_str());
     QVERIFY(!plan.variants.empty());
