@@ -204,7 +204,7 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
     const double titleH = 42, cautionH = 24;
     const double rowH = std::min(5.0, (H - margin - titleH - cautionH - y - 6) / rows);
     const double text = rowH * 0.62;
-    const double cols[5] = {0.0, 0.36, 0.5, 0.64, 0.74};
+    const double cols[5] = {0.0, 0.30, 0.46, 0.62, 0.75};
     const char* heads[5] = {"Room", "Target", "Actual", "Dev.", "W × D"};
     auto row = [&](const QStringList& cells, bool bold) {
         p.setFont(fontMm(text, dpmm, bold));
