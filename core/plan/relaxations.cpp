@@ -114,7 +114,8 @@ std::vector<Relaxation> relaxationsFor(const Brief& given, const Footprint& fp, 
         const int i = item.rooms.empty() ? -1 : item.rooms.front();
         const std::string name = i >= 0 ? brief.rooms[i].displayName() : std::string();
         // The room's own numbers.
-        if (item.requirement == "area" && i >= 0) {
+        // (With `surplus: spread` a target is not what the room gets: no such suggestion.)
+        if (item.requirement == "area" && i >= 0 && given.surplus != Surplus::Spread) {
             Brief b = brief;
             b.rooms[i].area = std::round(item.got * 10) / 10;
             if (const int n = check.meets(b, fp, item); n > 0 && (fixes.push_back(n), true))
