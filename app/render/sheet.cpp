@@ -207,10 +207,17 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
     const double cols[5] = {0.0, 0.30, 0.46, 0.62, 0.75};
     const char* heads[5] = {"Room", "Target", "Actual", "Dev.", "W × D"};
     auto row = [&](const QStringList& cells, bool bold) {
-        p.setFont(fontMm(text, dpmm, bold));
         for (int c = 0; c < 5; ++c) {
             const double cx = x0 + 3 + cols[c] * colW;
             const double cw = (c < 4 ? cols[c + 1] * colW : colW) - cols[c] * colW - 1;
+            // A name that does not fit is set smaller (down to 2 mm) before it
+            // is cut short: the schedule is where a numbered room is named.
+            double size = text;
+            p.setFont(fontMm(size, dpmm, bold));
+            while (size > 2.0 && QFontMetricsF(p.font()).horizontalAdvance(cells.value(c)) > cw * dpmm) {
+                size = std::max(2.0, size - 0.1);
+                p.setFont(fontMm(size, dpmm, bold));
+            }
             p.drawText(mm(cx, y, cw, rowH), (c == 0 ? Qt::AlignLeft : Qt::AlignRight) | Qt::AlignVCenter,
                        QFontMetricsF(p.font()).elidedText(cells.value(c), Qt::ElideRight, cw * dpmm));
         }
