@@ -31,7 +31,6 @@ std::string facadeJson(const FacadeWish& f) {
 }
 
 struct Verifier {
-    const Brief& brief;
     const Footprint& fp;
     const PlanVariant& v;
     std::set<std::string> before; // field + requirement of every item missed now
@@ -76,7 +75,7 @@ std::vector<Relaxation> relaxationsFor(const Brief& given, const Footprint& fp, 
     const Brief brief = plannedBrief(given);
     const std::vector<UnmetItem> items = unmetRequirements(given, fp, v);
     if (items.empty() || v.rooms.size() != brief.rooms.size() || v.extended.graph.vertexCount() == 0) return out;
-    Verifier check{brief, fp, v, {}};
+    Verifier check{fp, v, {}};
     for (const UnmetItem& u : items) check.before.insert(Verifier::key(u));
     const std::string& unit = brief.units;
     // Targets over the footprint: the footprint just large enough, either way.
