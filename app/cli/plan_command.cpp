@@ -1,6 +1,7 @@
 #include "cli_commands.h"
 
 #include "io/atomic_file.h"
+#include "plan/relaxations.h"
 #include "plan/unmet.h"
 #include "io/plan_io.h"
 #include "io/project_io.h"
@@ -107,12 +108,21 @@ int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostrea
         out << "  The best variant meets every requirement of the brief.\n";
     } else {
         out << "  The best variant does not meet " << unmet.size() << " requirement(s):\n";
-        for (std::size_t k = 0; k < unmet.size() && k < 20; ++k) out << "    " << unmet[k].text << "\n";
-        if (unmet.size() > 20) out << "    and " << unmet.size() - 20 << " more (see \"unmet\" in the plan file)\n";
         const std::vector<Relaxation>& give = plan.variants.front().relaxations;
+        for (std::size_t k = 0; k < unmet.size() && k < 20; ++k) {
+            out << "    " << unmet[k].text << "\n";
+            const std::vector<std::string> held = heldBy(unmet[k], give);
+            for (std::size_t h = 0; h < held.size() && h < 4; ++h)
+                out << "      " << (h == 0 ? "held there by " : "          and ") << held[h] << "\n";
+        }
+        if (unmet.size() > 20) out << "    and " << unmet.size() - 20 << " more (see \"unmet\" in the plan file)\n";
         if (!give.empty()) {
-            out << "  What would meet them (one change each, checked by sizing the plan again):\n";
-            for (const Relaxation& r : give) out << "    " << r.text << "  \u2192 meets: " << r.meets << "\n";
+            out << "  What would meet them (one change each, checked by planning again):\n";
+            for (const Relaxation& r : give) {
+                out << "    " << r.text << "  \u2192 meets: " << r.meets.front();
+                if (r.meets.size() > 1) out << " (and " << r.meets.size() - 1 << " more)";
+                out << "\n";
+            }
         }
     }
     return exitOk;

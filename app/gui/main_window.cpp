@@ -1,5 +1,6 @@
 #include "main_window.h"
 
+#include "plan/relaxations.h"
 #include "plan/unmet.h"
 
 #include "brief/brief_edit.h"
@@ -20,6 +21,8 @@
 #include "sketch_view.h"
 
 #include <QtConcurrent/QtConcurrentRun>
+
+#include <cstdio>
 
 #include <QAction>
 #include <QActionGroup>
@@ -620,16 +623,37 @@ void MainWindow::showDiagnostics() {
     std::vector<Diagnostic> all = check_.diagnostics;
     // The plan on show: what it does not meet, and what would meet it.
     if (haveCurrent_ && current_.rooms.size() == planBrief_.rooms.size() && planBrief_.rooms.size() == brief().rooms.size()) {
+        // The check's notes name what the plan on show gives up, not what the check's own graph did.
+        if (planBrief_.adjacencies.size() == brief().adjacencies.size()) reconcileDiagnostics(brief(), current_, all);
         for (const UnmetItem& u : unmetRequirements(planBrief_, planFootprint_, current_)) {
-            Diagnostic d{Severity::Warning, "unmet", tr("Not met in the plan on show: %1").arg(QString::fromStdString(u.text)).toStdString(),
-                         u.rooms, {}};
+            QString text = tr("Not met in the plan on show: %1").arg(QString::fromStdString(u.text));
+            const std::vector<std::string> held = heldBy(u, current_.relaxations);
+            QStringList heldList;
+            for (const std::string& h : held) heldList << QString::fromStdString(h);
+            if (!heldList.isEmpty()) text += tr(" \u2014 held there by %1").arg(heldList.join(QStringLiteral("; ")));
+            Diagnostic d{Severity::Warning, "unmet", text.toStdString(), u.rooms, {}};
             if (u.adjacency >= 0) d.adjacencies = {u.adjacency};
             all.push_back(d);
         }
+        // The rooms a relaxation changes (a room's field, an adjacency's two rooms).
+        auto relaxationRooms = [&](const Relaxation& r) {
+            std::vector<int> rooms;
+            int k = -1;
+            if (std::sscanf(r.field.c_str(), "/rooms/%d", &k) == 1 && k >= 0 && k < int(planBrief_.rooms.size()))
+                rooms.push_back(k);
+            else if (std::sscanf(r.field.c_str(), "/adjacencies/%d", &k) == 1 && k >= 0 &&
+                     k < int(planBrief_.adjacencies.size()))
+                for (const std::string& id : {planBrief_.adjacencies[k].a, planBrief_.adjacencies[k].b})
+                    if (const int i = planBrief_.roomIndex(id); i >= 0) rooms.push_back(i);
+            return rooms;
+        };
         for (const Relaxation& r : current_.relaxations)
             all.push_back({Severity::Info, "relaxation",
-                           tr("Would meet \u201c%1\u201d: %2").arg(QString::fromStdString(r.meets), QString::fromStdString(r.text)).toStdString(),
-                           {}, {}});
+                           tr("Would meet \u201c%1\u201d%3: %2")
+                               .arg(QString::fromStdString(r.meets.front()), QString::fromStdString(r.text),
+                                    r.meets.size() > 1 ? tr(" and %n more", nullptr, int(r.meets.size() - 1)) : QString())
+                               .toStdString(),
+                           relaxationRooms(r), {}});
     }
     for (const Diagnostic& d : all) {
         const QString prefix = d.severity == Severity::Error     ? tr("Problem: ")

@@ -2,11 +2,15 @@
 
 #include "palette.h"
 #include "plan/plan_builder.h"
+#include "plan/relaxations.h"
+#include "plan/unmet.h"
 
 #include <QContextMenuEvent>
+#include <QHelpEvent>
 #include <QMenu>
 #include <QMouseEvent>
 #include <QPainter>
+#include <QToolTip>
 
 #include <algorithm>
 #include <cmath>
@@ -62,8 +66,47 @@ void PlanView::setVariant(const Brief& brief, const Footprint& footprint, const 
     has_ = true;
     message_.clear();
     drag_ = Drag::None;
+    notes_.assign(brief.rooms.size(), {});
+    hint_.assign(brief.rooms.size(), {});
+    if (v_.rooms.size() == brief.rooms.size()) {
+        for (const UnmetItem& u : unmetRequirements(brief, footprint, v_)) {
+            QStringList lines{QString::fromStdString(u.text)};
+            for (const std::string& h : heldBy(u, v_.relaxations))
+                lines << tr("  held there by %1").arg(QString::fromStdString(h));
+            QString first;
+            for (const Relaxation& r : v_.relaxations)
+                if (std::find(r.meets.begin(), r.meets.end(), u.text) != r.meets.end()) {
+                    lines << tr("  would be met by: %1").arg(QString::fromStdString(r.text));
+                    if (first.isEmpty()) first = QString::fromStdString(r.text);
+                }
+            for (int room : u.rooms) {
+                if (room < 0 || room >= int(notes_.size())) continue;
+                notes_[room] << lines;
+                // Beside the room its name goes without saying.
+                const QString own = QString::fromStdString(brief.rooms[room].displayName()) + QStringLiteral(": ");
+                if (hint_[room].isEmpty() && !first.isEmpty())
+                    hint_[room] = first.startsWith(own) ? first.mid(own.size()) : first;
+            }
+        }
+    }
     rebuildProblem();
     update();
+}
+
+QStringList PlanView::roomNotes(int room) const {
+    return room >= 0 && room < int(notes_.size()) ? notes_[room] : QStringList();
+}
+
+bool PlanView::event(QEvent* event) {
+    if (event->type() == QEvent::ToolTip && has_) {
+        auto* help = static_cast<QHelpEvent*>(event);
+        const int i = brief_.roomIndex(roomAt(help->pos()).toStdString());
+        if (!roomNotes(i).isEmpty()) {
+            QToolTip::showText(help->globalPos(), roomNotes(i).join(QLatin1Char('\n')), this);
+            return true;
+        }
+    }
+    return QWidget::event(event);
 }
 
 void PlanView::showMessage(const QString& text) {
@@ -361,6 +404,29 @@ void PlanView::paintEvent(QPaintEvent*) {
             p.drawText(local, Qt::AlignCenter, fm.elidedText(lines[0], Qt::ElideRight, local.width()));
         }
         p.restore();
+        // A room that misses something: a "!" tag in its top right corner
+        // (shape and text, not colour alone), and the first change that
+        // would meet it along its bottom edge where that fits.
+        if (i < notes_.size() && !notes_[i].isEmpty() && box.width() > 18 && box.height() > 18) {
+            const QRectF tag(box.right() - 17, box.top() + 3, 14, 14);
+            p.setPen(QPen(QColor(0x8B, 0x1A, 0x1A), 1.2));
+            p.setBrush(QColor(0xFF, 0xF4, 0xD6));
+            p.drawEllipse(tag);
+            QFont bold = font();
+            bold.setBold(true);
+            bold.setPixelSize(11);
+            p.setFont(bold);
+            p.drawText(tag, Qt::AlignCenter, QStringLiteral("!"));
+            if (!dimensions_ && !turn && !hint_[i].isEmpty() && box.height() > 3 * lh + 28 && box.width() > 90) {
+                QFont small = font();
+                small.setItalic(true);
+                small.setPixelSize(10);
+                p.setFont(small);
+                const QFontMetricsF sm(small);
+                p.drawText(box.adjusted(4, 2, -4, -3), Qt::AlignBottom | Qt::AlignHCenter,
+                           sm.elidedText(QStringLiteral("\u2192 ") + hint_[i], Qt::ElideRight, box.width() - 8));
+            }
+        }
         if (locked_.count(int(i))) {
             QFont small = font();
             small.setPixelSize(10);

@@ -16,7 +16,9 @@ namespace abut::gui {
 // achieved area against the target ("12.4 of 14 m², −11 %" with an arrow
 // down or up, so the deviation reads without colour), spare spaces hatched,
 // dropped adjacencies drawn as dashed lines marked × and listed under the
-// plan, room dimensions on demand.
+// plan, room dimensions on demand. A room that misses a requirement carries
+// a "!" tag and, where it fits, the first change that would meet it; its
+// tooltip says what is missed, what holds it there and what would meet it.
 //
 // Sizing by hand: drag an inner wall (a maximal segment) — it moves only
 // within the range the sizing core allows and only the rooms beside it
@@ -56,6 +58,9 @@ public:
     QPointF toScreen(double x, double y) const;
     double pixelsPerUnit() const;
     QString roomAt(const QPointF& screen) const;
+    // What the variant does not meet for a room, what holds it there and
+    // what would meet it (the room's tooltip; a "!" tag marks the room).
+    QStringList roomNotes(int room) const;
 
 signals:
     void roomHovered(const QString& id); // "" when none
@@ -70,6 +75,7 @@ protected:
     void mouseReleaseEvent(QMouseEvent* event) override;
     void leaveEvent(QEvent* event) override;
     void contextMenuEvent(QContextMenuEvent* event) override;
+    bool event(QEvent* event) override;
 
 private:
     void rebuildProblem();
@@ -86,6 +92,8 @@ private:
     QString hovered_, highlighted_;
     bool dimensions_ = false;
     std::set<int> locked_;
+    std::vector<QStringList> notes_; // per room: unmet, held by, would meet (see roomNotes)
+    std::vector<QString> hint_;      // per room: the first change that would meet its misses
     std::unique_ptr<SizingProblem> problem_;
     SizingResult state_; // segment positions of v_
     double grid_ = 0;

@@ -1,5 +1,6 @@
 #include "io/plan_io.h"
 
+#include "plan/relaxations.h"
 #include "plan/unmet.h"
 
 #include <cmath>
@@ -55,10 +56,11 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
             for (int r : u.rooms) ids.push_back(brief.rooms[r].id);
             item["rooms"] = ids;
             if (u.requirement != "facade") {
-                item["wanted"] = tidy(u.wanted);
-                item["got"] = tidy(u.got);
+                item["target"] = tidy(u.wanted);
+                item["achieved"] = tidy(u.got);
             }
             item["text"] = u.text;
+            if (const std::vector<std::string> held = heldBy(u, v.relaxations); !held.empty()) item["heldBy"] = held;
             notMet.push_back(item);
         }
         vj["unmet"] = notMet;
@@ -66,7 +68,7 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
         OrderedJson give = OrderedJson::array();
         for (const Relaxation& r : v.relaxations) {
             OrderedJson item = {{"field", r.field}};
-            for (const auto& [key, text] : {std::pair{"current", &r.current}, std::pair{"suggested", &r.suggested}}) {
+            for (const auto& [key, text] : {std::pair{"from", &r.from}, std::pair{"to", &r.to}}) {
                 try {
                     item[key] = OrderedJson::parse(*text);
                 } catch (const nlohmann::json::exception&) {

@@ -28,9 +28,10 @@ struct PlanMetrics {
 // (plan/relaxations.h finds and verifies them).
 struct Relaxation {
     std::string field;              // the project field it changes, as a JSON Pointer
-    std::string current, suggested; // JSON values
+    std::string from, to;           // JSON values: the field now, and as suggested
     std::string text;               // one line in the planner's words
-    std::string meets;              // the requirement it meets (an UnmetItem's text)
+    std::string holds;              // the requirement it relaxes, as it stands, e.g. "Store's minimum width of 1.8 m"
+    std::vector<std::string> meets; // the requirements it meets (UnmetItem texts)
     double change = 0;              // relative size of the change (for ranking; giving up counts 1)
 };
 

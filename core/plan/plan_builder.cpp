@@ -264,12 +264,6 @@ private:
 
 } // namespace
 
-// The augmentation's diagnostics speak of its own graph; the best variant
-// may come from the search and give up something else, or nothing. Reworded
-// so that they say what the best variant gives up: the reason stays (four
-// rooms that must all touch, crossing lines), the adjacency named is the one
-// the variant drops, and facade notes are the variant's own.
-namespace {
 void reconcileDiagnostics(const Brief& brief, const PlanVariant& best, std::vector<Diagnostic>& diagnostics) {
     auto describe = [&](int k) {
         const Adjacency& a = brief.adjacencies[k];
@@ -312,7 +306,6 @@ void reconcileDiagnostics(const Brief& brief, const PlanVariant& best, std::vect
                        {r}, {}});
     diagnostics = std::move(out);
 }
-} // namespace
 
 SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options) {
     SizingOptions s;

@@ -37,6 +37,14 @@ SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options =
 // Best first: sized before fitted, then by score (variantScore).
 void rankVariants(const Brief& brief, const Footprint& footprint, std::vector<PlanVariant>& variants);
 
+// The augmentation's diagnostics speak of its own graph; a variant may come
+// from the search and give up something else, or nothing. Reworded so that
+// they say what `v` gives up: the reason stays (four rooms that must all
+// touch, crossing lines), the adjacency named is the one `v` drops, and
+// facade notes are the variant's own. (The plan's notes and the editor's
+// live check beside the plan on show both pass through here.)
+void reconcileDiagnostics(const Brief& brief, const PlanVariant& v, std::vector<Diagnostic>& diagnostics);
+
 // One variant from a given extended graph and labeling. Its dropped
 // adjacencies are those `x` does not join, plus doors left too short.
 PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,

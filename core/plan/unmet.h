@@ -15,12 +15,13 @@
 namespace abut {
 
 struct UnmetItem {
-    std::string requirement; // "area", "minWidth", "maxAspect", "facade", "adjacency"
+    std::string requirement; // "area", "minWidth", "maxAspect", "facade", "door" (a 'must' door), "adjacency" (a 'must' wall)
     std::string field;       // the brief field it concerns, as a JSON Pointer (e.g. /rooms/3/area)
     std::vector<int> rooms;  // brief room indices
     int adjacency = -1;      // brief adjacency index ("adjacency")
     double wanted = 0, got = 0; // area, width, aspect or wall length; 0 for facades
     std::string text;        // one line, e.g. "Office 3: 2.4 m wide, minimum 2.7 m"
+    std::vector<std::string> heldBy; // what the plan shows holds it there (facades: who takes the side)
 };
 
 std::vector<UnmetItem> unmetRequirements(const Brief& brief, const Footprint& footprint, const PlanVariant& v);

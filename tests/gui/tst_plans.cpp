@@ -13,6 +13,7 @@
 #include "schedule_panel.h"
 #include "variants_strip.h"
 
+#include <QGraphicsScene>
 #include <QElapsedTimer>
 #include <QListWidget>
 #include <QPushButton>
@@ -125,7 +126,9 @@ private slots:
 
     // The diagnostics list says what the plan on show does not meet (the
     // studio's four rooms cannot all touch) and what would meet it; a click
-    // on the entry selects the rooms it names.
+    // on the entry selects the rooms it names, and so does a click on the
+    // relaxation. The plan view marks the two rooms and says the same in
+    // their tooltips; the live check's note names what the plan drops.
     void diagnosticsListWhatThePlanMisses() {
         const auto window = windowOn(options(), "four-way-studio");
         QVERIFY(window);
@@ -133,16 +136,39 @@ private slots:
         waitForPlans(w);
         QTRY_VERIFY(!w.checking());
         QListWidgetItem* notMet = nullptr;
-        bool wouldMeet = false;
+        QListWidgetItem* wouldMeet = nullptr;
         for (int k = 0; k < w.diagnosticsList()->count(); ++k) {
             QListWidgetItem* item = w.diagnosticsList()->item(k);
             if (item->text().contains(QStringLiteral("Not met in the plan on show")) && !notMet) notMet = item;
-            wouldMeet = wouldMeet || item->text().contains(QStringLiteral("make the adjacency 'should'"));
+            if (item->text().startsWith(QStringLiteral("Would meet")) && !wouldMeet) wouldMeet = item;
         }
         QVERIFY(notMet);
         QVERIFY(wouldMeet);
         emit w.diagnosticsList()->itemClicked(notMet);
         QCOMPARE(w.sketchView()->selectedRooms().size(), 2);
+        w.sketchView()->scene()->clearSelection();
+        emit w.diagnosticsList()->itemClicked(wouldMeet);
+        QCOMPARE(w.sketchView()->selectedRooms().size(), 2);
+        int marked = 0;
+        for (int i = 0; i < int(w.brief().rooms.size()); ++i) {
+            const QStringList notes = w.planView()->roomNotes(i);
+            if (notes.isEmpty()) continue;
+            ++marked;
+            QVERIFY2(notes.join(QLatin1Char('\n')).contains(QStringLiteral("would be met by")), qPrintable(notes.join(QLatin1Char('\n'))));
+        }
+        QCOMPARE(marked, 2);
+        // The check's note about the four rooms names what the plan on show
+        // drops, not what the check's own graph dropped.
+        const PlanVariant& shown = w.planView()->variant();
+        QCOMPARE(int(shown.dropped.size()), 1);
+        const Adjacency& gone = w.brief().adjacencies[shown.dropped.front()];
+        const QString pair = QString::fromStdString(w.brief().rooms[w.brief().roomIndex(gone.a)].displayName() + "\u2013" +
+                                                    w.brief().rooms[w.brief().roomIndex(gone.b)].displayName());
+        for (int k = 0; k < w.diagnosticsList()->count(); ++k) {
+            const QString text = w.diagnosticsList()->item(k)->text();
+            if (text.contains(QStringLiteral("must all touch")))
+                QVERIFY2(text.contains(pair), qPrintable(text + " / " + pair));
+        }
     }
 
     void cancelStopsPromptly() {

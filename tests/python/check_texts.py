@@ -7,10 +7,14 @@
   'must' adjacencies and the facades;
 - the PDF sheet of a plan that drops a 'must' lists it under "Not met"
   (read back with poppler's pdftotext);
-- what must give: the clinic broken in one place (a minimum width past what
-  fits, the footprint 10 % narrower): the first relaxation in the plan file
-  names the broken field, `plan` prints it, and the brief with it applied
-  gets a plan that meets everything (judged with shapely);
+- what must give: briefs with an exact answer (the clinic, read off a drawn
+  plan; a 3 × 3 grid of our own), met before, then broken in one place (a
+  minimum width past what fits, the footprint 10 % narrower, one target
+  doubled, a facade wish the others leave no room for): the first relaxation
+  in the plan file names the broken field (a doubled target: that target or
+  the footprint), `plan` prints it, and the brief with it applied gets a plan
+  that meets everything (judged with shapely); the unmet facade says what
+  holds it there; unmet items carry `target` and `achieved` (formats.md);
 - sheets: no text under 2 mm printed height on the office floor's sheet, and
   a feet version of it gets the same text sizes;
 - surplus: with "spare" every room stays within its band and spare spaces
@@ -68,7 +72,7 @@ with tempfile.TemporaryDirectory() as tmp:
     best = plan["variants"][0]
     rooms, spaces = plan_quality.plan_rooms(best)
     judged = [m for m in plan_quality.misses(brief, rooms, spaces) if m.startswith("must ") or "facade" in m]
-    listed = [u for u in best["unmet"] if u["requirement"] in ("adjacency", "facade")]
+    listed = [u for u in best["unmet"] if u["requirement"] in ("adjacency", "door", "facade")]
     expect(len(judged) == len(listed) and listed, f"plan file unmet {listed} against the judge's {judged}")
     for u in best["unmet"]:
         expect(u["text"] in r.stdout, f"plan output lists {u['text']!r}")
@@ -111,21 +115,63 @@ with tempfile.TemporaryDirectory() as tmp:
     # broken field, and the brief with it applied gets a usable plan.
     clinic = json.load(open(os.path.join(samples, "clinic.abut.json")))
     ids = [x["id"] for x in clinic["rooms"]]
-    broken = {
-        "a minimum width past what fits": ("/rooms/%d/minWidth" % ids.index("consult1"),
+    # The facade case on a brief of our own built with an exact answer: a
+    # 3 × 3 grid (columns 4, 3, 5 m, rows the same) whose eight outer rooms
+    # wish their sides, and a hall in the middle (9 m², which fits no place
+    # on the perimeter) that is then given a wish for an outside wall.
+    grid = {"format": "abut.project", "version": 1, "footprint": {"width": 12, "depth": 12}, "rooms": [],
+            "adjacencies": []}
+    names = [["sw", "s", "se"], ["w", "hall", "e"], ["nw", "n", "ne"]]
+    wish = {"sw": ["S", "W"], "s": ["S"], "se": ["S", "E"], "w": ["W"], "e": ["E"], "nw": ["N", "W"], "n": ["N"],
+            "ne": ["N", "E"]}
+    for r in range(3):
+        for c in range(3):
+            w_, d_ = [4, 3, 5][c], [4, 3, 5][r]
+            room = {"id": names[r][c], "area": w_ * d_, "minWidth": round(0.9 * min(w_, d_), 2)}
+            if names[r][c] in wish:
+                room["facade"] = wish[names[r][c]]
+            grid["rooms"].append(room)
+            if c < 2:
+                grid["adjacencies"].append({"rooms": [names[r][c], names[r][c + 1]], "kind": "wall",
+                                            "priority": "must" if "hall" in names[r][c:c + 2] else "should"})
+            if r < 2:
+                grid["adjacencies"].append({"rooms": [names[r][c], names[r + 1][c]], "kind": "wall",
+                                            "priority": "must" if names[r][c] == "hall" or names[r + 1][c] == "hall"
+                                            else "should"})
+    cases = {
+        "a minimum width past what fits": (clinic, ["/rooms/%d/minWidth" % ids.index("consult1")],
                                            lambda b: b["rooms"][ids.index("consult1")].update(minWidth=5.5)),
-        "the footprint 10 % narrower": ("/footprint/width", lambda b: b["footprint"].update(width=19.8)),
+        "the footprint 10 % narrower": (clinic, ["/footprint/width"], lambda b: b["footprint"].update(width=19.8)),
+        # A doubled target: that target, or the footprint, must give.
+        "one target doubled": (clinic, ["/rooms/%d/area" % ids.index("consult2"), "/footprint/width",
+                                        "/footprint/depth"],
+                               lambda b: b["rooms"][ids.index("consult2")].update(area=34.0)),
+        "a facade wish the others leave no room for": (grid, ["/rooms/4/facade"],
+                                                       lambda b: b["rooms"][4].update(facade=["any"])),
     }
-    for what, (field, breakIt) in broken.items():
-        b = json.loads(json.dumps(clinic))
+    for what, (base_brief, fields, breakIt) in cases.items():
+        b = json.loads(json.dumps(base_brief))
+        path = os.path.join(tmp, "exact.abut.json")
+        json.dump(b, open(path, "w"))
+        out = os.path.join(tmp, "exact.plan.json")
+        run("plan", path, "-o", out, "--time-limit", "20", "--threads", "1")
+        rooms_, spaces_ = plan_quality.plan_rooms(json.load(open(out))["variants"][0])
+        expect(not plan_quality.misses(b, rooms_, spaces_), f"{what}: the brief before the break is met")
         breakIt(b)
         path = os.path.join(tmp, "broken.abut.json")
         json.dump(b, open(path, "w"))
         out = os.path.join(tmp, "broken.plan.json")
         r = run("plan", path, "-o", out, "--time-limit", "10", "--threads", "1")
         expect(r.returncode == 0, f"{what}: plan exit {r.returncode}")
-        give = json.load(open(out))["variants"][0]["relaxations"]
-        expect(give and give[0]["field"] == field, f"{what}: first relaxation {give[:1]} should name {field}")
+        best_ = json.load(open(out))["variants"][0]
+        give = best_["relaxations"]
+        for u in best_["unmet"]:
+            expect(u["requirement"] == "facade" or ("target" in u and "achieved" in u),
+                   f"{what}: unmet item {u} has target and achieved")
+            if u["requirement"] == "facade":
+                expect(u.get("heldBy"), f"{what}: the unmet facade says what holds it there: {u}")
+                expect("held there by" in r.stdout, f"{what}: plan prints what holds the facade")
+        expect(give and give[0]["field"] in fields, f"{what}: first relaxation {give[:1]} should name {fields}")
         if not give:
             continue
         expect(give[0]["text"] in r.stdout, f"{what}: plan prints the relaxation")
@@ -134,7 +180,7 @@ with tempfile.TemporaryDirectory() as tmp:
         target = b
         for p in parts[:-1]:
             target = target[int(p)] if isinstance(target, list) else target[p]
-        target[parts[-1]] = give[0]["suggested"]
+        target[parts[-1]] = give[0]["to"]
         json.dump(b, open(path, "w"))
         r = run("plan", path, "-o", out, "--time-limit", "20", "--threads", "1")
         rooms_, spaces_ = plan_quality.plan_rooms(json.load(open(out))["variants"][0])
