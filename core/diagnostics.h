@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // What a stage tells the planner: a message in a planner's words plus the ids
 // of the rooms and adjacencies involved, so the editor can highlight them.
 #pragma once

@@ -1,4 +1,5 @@
 #!/usr/bin/env bash
+# SPDX-License-Identifier: MIT
 # Installs everything Abut needs to build, run and test on Debian 12.
 # Used by README.md, .ci/run and developers alike. Idempotent: when every
 # package is present it prints nothing and touches no package list.

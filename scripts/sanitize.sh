@@ -1,4 +1,5 @@
 #!/usr/bin/env bash
+# SPDX-License-Identifier: MIT
 # Core and its tests built with clang under AddressSanitizer and
 # UndefinedBehaviorSanitizer, then the libFuzzer targets for a short,
 # time-boxed run each (ABUT_FUZZ_SECONDS, default 60). Any sanitizer report

@@ -1,4 +1,5 @@
 #!/usr/bin/env bash
+# SPDX-License-Identifier: MIT
 # The README's test command: installs what is missing, builds, runs every
 # test, then the sanitizer and fuzzing run (scripts/sanitize.sh).
 # ABUT_QUICK=1 skips the sanitizer run for a faster local loop.

@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 # Fails when any file under core/ includes a Qt header: core must stay Qt-free.
 file(GLOB_RECURSE files "${CORE_DIR}/*.h" "${CORE_DIR}/*.cpp")
 set(bad "")

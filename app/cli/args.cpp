@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "cli_commands.h"
 
 #include "io/project_io.h"

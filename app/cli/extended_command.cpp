@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "cli_commands.h"
 
 #include "augment/augment.h"

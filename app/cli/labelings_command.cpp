@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "cli_commands.h"
 
 #include "io/extended_graph_io.h"

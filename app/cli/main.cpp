@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // abut-cli: the command-line front end for batch use and tests. The commands
 // and exit codes follow the project's file-format contract.
 #include "cli_commands.h"

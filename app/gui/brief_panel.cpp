@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "brief_panel.h"
 
 #include "brief/brief_edit.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "live_check.h"
 
 #include "augment/augment.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // abut: the editor. `abut [PROJECT]` opens a brief;
 // `abut --screenshot OUT.png [--size WxH] PROJECT` renders the window to a PNG
 // and exits (works with QT_QPA_PLATFORM=offscreen).

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #pragma once
 
 #include "brief/brief.h"
@@ -35,6 +36,14 @@ struct MainWindowOptions {
     int planDelayMs = 250;       // plan computation after the last edit (the first plan shows within 0.5 s)
 };
 
+// The editor's window: the sketch (bubble diagram) and the brief panel edit
+// one Document (brief + undo stack); every edit restarts the live check
+// (LiveCheck, worker thread) and, after a pause, the plan computation
+// (PlanRunner). It holds the plan session — the variants of the last
+// computation, the one on show and the brief it was planned from, locked
+// rooms — and feeds the variants strip, the plan view, the area schedule and
+// the diagnostics list; a wall or target drag in the plan view comes back as
+// one undoable edit. Files, recovery, export and printing hang off its menus.
 class MainWindow : public QMainWindow {
     Q_OBJECT
 public:

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "palette.h"
 
 #include <array>

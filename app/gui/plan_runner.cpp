@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "plan_runner.h"
 
 #include "plan/plan_builder.h"

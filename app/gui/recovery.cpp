@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "recovery.h"
 
 #include "io/atomic_file.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "schedule_panel.h"
 
 #include "export/schedule.h"

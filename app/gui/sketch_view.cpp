@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "sketch_view.h"
 
 #include "brief/brief_edit.h"

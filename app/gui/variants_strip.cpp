@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "variants_strip.h"
 
 #include "plan/variant_key.h"

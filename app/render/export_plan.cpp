@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "export_plan.h"
 
 #include "export/schedule.h"

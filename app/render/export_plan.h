@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Writing one plan variant to a file, the format chosen by the extension:
 // .dxf (CAD), .pdf (sheet for the client), .svg, .png, .csv (area schedule).
 // Shared by `abut-cli export` and the editor's Export action. Written beside

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Drawing a plan with QPainter: the PDF sheet for the client (ISO 216 page,
 // standard scale, scale bar, north arrow, area schedule, title block, safety
 // caution) and PNG images. Layout of our own design.

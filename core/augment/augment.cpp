@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "augment/augment.h"
 
 #include "augment/connect.h"

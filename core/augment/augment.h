@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // From a brief to an extended graph: the whole augmentation stage.
 //
 //   embed (planarity; drop the cheapest adjacency of a Kuratowski witness

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "augment/connect.h"
 
 #include <algorithm>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Joining a brief's separate groups of rooms, and removing cut vertices, by
 // added contacts (extra walls, harmless to the brief). Both keep the graph
 // plane and create no separating triangle: a join edge links two groups, so

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "augment/corner_assignment.h"
 
 #include <algorithm>

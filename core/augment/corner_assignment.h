@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Splitting the outer cycle of the rooms' graph into the four facade sides.
 //
 // The rooms on the outer cycle touch the building's outline; the four corners

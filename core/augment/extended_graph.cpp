@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "augment/extended_graph.h"
 
 #include "augment/separating_triangles.h"

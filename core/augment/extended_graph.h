@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The extended graph: the rooms' adjacency graph grown into an irreducible
 // triangulation of the 4-cycle N–E–S–W (all inner faces triangles, no
 // separating triangle, no chord N–S or E–W). Exactly these graphs have a

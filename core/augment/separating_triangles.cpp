@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "augment/separating_triangles.h"
 
 #include <algorithm>

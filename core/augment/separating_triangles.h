@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Separating triangles of a plane graph, and the cheapest set of edges whose
 // removal breaks them all.
 //

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "augment/triangulate.h"
 
 #include <algorithm>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Triangulating the inner faces of a plane graph without creating a separating
 // triangle, in the spirit of Biedl, Kant & Kaufmann (Algorithmica 19, 1997).
 //

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "brief/brief.h"
 
 #include <cmath>

@@ -1,6 +1,8 @@
+// SPDX-License-Identifier: MIT
 // The brief: what the planner asks for. Rooms with target areas, required
-// adjacencies, facade wishes, footprint. Plain data; validation lives in
-// brief/validate.h, file reading and writing in io/project_io.h.
+// adjacencies, facade wishes, footprint. Plain data; the file reader
+// (io/project_io.h) and every edit (brief/brief_edit.h) check the ranges
+// below; brief/footprint_check.h checks targets against the footprint.
 #pragma once
 
 #include <nlohmann/json.hpp>
@@ -41,6 +43,13 @@ inline constexpr double minLength = 0.001, maxLength = 10000;
 inline constexpr double minArea = 1e-6, maxArea = 1e8;
 inline constexpr double maxAspectLimit = 1000;
 inline constexpr double maxSketchCoordinate = 1e9;
+
+// The one default for what counts as a contact and what a spare space is,
+// in plan units: the shortest wall that makes two rooms adjacent (any
+// positive length, kept visible on a drawing) and the smallest side of a
+// spare space. Every stage (fitting, sizing, search, plan) defaults to these.
+inline constexpr double minContactLength = 0.05;
+inline constexpr double minSpareSide = 0.3;
 
 // Index of the first control character (U+0000–U+001F or U+007F: tabs and
 // line breaks included) in `text`, or std::string::npos. Ids, names and

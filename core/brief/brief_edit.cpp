@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "brief/brief_edit.h"
 
 #include <algorithm>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Edits of a brief as the editor makes them: add and remove rooms and
 // adjacencies, move rooms in the sketch, change one field from text the
 // planner typed. Each edit either applies completely or refuses with a

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "brief/footprint_check.h"
 
 #include <algorithm>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Whether the brief's numbers fit its footprint at all: the rooms' targets
 // must not add up to more than the footprint's area, and no room may need to
 // be wider than the footprint. Such a brief is still a valid file (the

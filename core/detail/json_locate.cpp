@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "detail/json_locate.h"
 
 #include <vector>

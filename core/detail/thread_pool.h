@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // A fixed set of worker threads that run a batch of numbered tasks and wait
 // for all of them: the plan search runs one round of every annealing chain
 // this way. Task k of a batch always does the same work whichever thread

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "dual/rectangular_dual.h"
 
 #include <algorithm>

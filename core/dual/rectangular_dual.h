@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Rectangular dual from a regular edge labeling.
 //
 // Method (Kant & He, Theor. Comput. Sci. 172, 1997; He, SIAM J. Comput. 22,
@@ -58,7 +59,7 @@ SegmentStructure maximalSegments(const ExtendedGraph& x, const RegularEdgeLabeli
 struct DualWeights {
     std::vector<double> minWidth, minDepth;
     std::vector<double> minWall;
-    double anyWall = 0.2;
+    double anyWall = minContactLength;
 };
 
 struct DualLayout {

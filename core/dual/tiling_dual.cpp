@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "dual/tiling_dual.h"
 
 #include <algorithm>

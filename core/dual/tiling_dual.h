@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The extended graph and regular edge labeling of a rectangle tiling: the
 // inverse of the rectangular dual. Two tiles that share a wall of positive
 // length are joined; a tile on the footprint's side X is joined to pole X;

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "embed/planar_embedding.h"
 
 #include <boost/graph/adjacency_list.hpp>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Planarity test and combinatorial embedding of the rooms' adjacency graph.
 //
 // Method: Boyer & Myrvold, "On the cutting edge: simplified O(n) planarity by

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "embed/straight_line_drawing.h"
 
 #include "embed/planar_embedding.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Tidy sketch: a planar straight-line drawing of the rooms' adjacency graph,
 // for the editor's "Tidy up" action.
 //

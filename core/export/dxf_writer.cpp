@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "export/dxf_writer.h"
 
 #include <algorithm>

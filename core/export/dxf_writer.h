@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // DXF (AutoCAD R2000, AC1015) of a plan variant for CAD: each room a closed
 // LWPOLYLINE on a layer per room category, its name and achieved area as
 // TEXT inside it; spare spaces on their own layer; the footprint outline; and,

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "export/schedule.h"
 
 #include <cstdio>

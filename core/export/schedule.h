@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The area schedule of a plan variant: one row per room, target against
 // achieved, plus totals. Shared by the CSV, DXF, SVG and PDF writers.
 #pragma once

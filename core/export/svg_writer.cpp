@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "export/svg_writer.h"
 
 #include "export/schedule.h"

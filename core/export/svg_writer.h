@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // SVG 1.1 of a plan variant: one <rect> per room (class "room", id = room id)
 // and per spare space (class "spare"), labels with name and achieved area,
 // the footprint outline. North is up; 1 plan unit = `pixelsPerUnit` px.

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "graph/plane_graph.h"
 
 #include <algorithm>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // A simple plane graph stored as a rotation system: for every vertex, its
 // neighbours in counter-clockwise order. Faces are traced with the face on the
 // left of each dart, so bounded faces come out counter-clockwise and the outer

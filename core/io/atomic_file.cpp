@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "io/atomic_file.h"
 
 #include <cerrno>

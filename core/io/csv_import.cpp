@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "io/csv_import.h"
 
 #include "brief/brief_edit.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Importing a room list or an adjacency matrix from CSV into a brief, as
 // planners keep them in spreadsheets. The two layouts are told apart by the
 // header row; both are documented in the README ("Importing from a

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "io/extended_graph_io.h"
 
 #include <set>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The extended-graph file (*.ext.json, format "abut.extended-graph" version 1):
 // vertex names, edges and the four poles. The embedding is not stored; it is
 // computed on reading (an irreducible triangulation of a 4-cycle has one

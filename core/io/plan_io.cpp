@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "io/plan_io.h"
 
 #include "plan/relaxations.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The plan file (*.plan.json, format "abut.plan" version 1): sized variants,
 // best first, each with its room rectangles, spare spaces and dropped
 // adjacencies, as laid down in the project's file-format contract.

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "io/project_io.h"
 
 #include "detail/json_locate.h"

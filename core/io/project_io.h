@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Reading and writing the project file (*.abut.json), format version 1 as
 // laid down in the project's file-format contract. Every problem is reported
 // as one line naming the file, the line, the JSON Pointer of the field and

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "label/labeling_lattice.h"
 
 #include "dual/rectangular_dual.h"

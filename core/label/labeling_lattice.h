@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The lattice of regular edge labelings of one extended graph.
 //
 // The labelings of an irreducible triangulation of a 4-cycle form a

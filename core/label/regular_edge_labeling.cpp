@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "label/regular_edge_labeling.h"
 
 #include <algorithm>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Regular edge labeling (transversal structure) of an extended graph.
 //
 // Every inner edge gets a colour and a direction: red edges point from the

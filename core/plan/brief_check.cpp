@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "plan/brief_check.h"
 
 #include "search/plan_search.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Whether a rectangular plan can keep every 'must' adjacency and facade wish
 // of a brief: the one check behind `abut-cli check` and the editor's live
 // check.

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "plan/graph_first.h"
 
 #include "label/labeling_lattice.h"

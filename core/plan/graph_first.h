@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The graph-first route, the pipeline before the plan search: the
 // augmentation's extended graphs (corner assignments, triangulations, the
 // pole route), a few regular edge labelings of each, laid out and fitted;

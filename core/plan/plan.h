@@ -1,8 +1,9 @@
+// SPDX-License-Identifier: MIT
 // A plan: one or more sized variants of a brief, each a set of axis-aligned
 // room rectangles and spare spaces that tile the footprint.
 #pragma once
 
-#include "augment/augment.h"
+#include "augment/extended_graph.h"
 #include "brief/brief.h"
 #include "diagnostics.h"
 #include "dual/rectangular_dual.h"
@@ -86,8 +87,8 @@ struct PlanOptions {
     double timeLimit = 0;            // seconds (0 = none: the search's move budget ends it)
     long long searchMoves = 0;       // plan search moves per chain (0 = from the room count)
     int variantFlips = -1;           // labeling flips of the best plan tried as variants (−1 = 3 × variants)
-    double anyWall = 0.05;           // m: shortest wall that counts as a contact (any positive length, kept visible)
-    double spareMinimum = 0.3;       // m: smallest side of a spare space
+    double anyWall = minContactLength; // m: shortest wall that counts as a contact (brief.h)
+    double spareMinimum = minSpareSide; // m: smallest side of a spare space
     int cornerTrials = 40;           // corner assignments tried per brief
     int augmentations = 4;           // triangulations tried per corner assignment (1 = the first only)
     int labelingsPerGraph = 24;      // labelings tried per extended graph

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "plan/plan_builder.h"
 
 #include "plan/graph_first.h"
@@ -92,7 +93,7 @@ void updateMetrics(const Brief& brief, const Footprint& fp, const ExtendedGraph&
 
 } // namespace
 
-// `v` with the rectangles of a sizing result, its metrics recomputed.
+// The rectangles per vertex of the extended graph, as the sizer indexes them.
 std::vector<Rect> vertexRects(const PlanVariant& v) {
     std::vector<Rect> rects(v.extended.graph.vertexCount());
     std::size_t room = 0, spare = 0;
@@ -308,11 +309,7 @@ void reconcileDiagnostics(const Brief& brief, const PlanVariant& best, std::vect
 }
 
 SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options) {
-    SizingOptions s;
-    s.doorWidth = brief.doorWidth;
-    s.anyWall = options.anyWall;
-    s.spareMinimum = options.spareMinimum;
-    s.grid = options.grid;
+    SizingOptions s = sizingOptionsFor(brief, options.anyWall, options.spareMinimum, options.grid);
     s.areaBands = true;
     return s;
 }

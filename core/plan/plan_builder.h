@@ -1,7 +1,16 @@
-// Brief → plan: extended graph (augment/), regular edge labeling (label/),
-// rectangular dual (dual/), then fitted into the footprint.
+// SPDX-License-Identifier: MIT
+// Brief → plan. Two routes, then one ranking:
+// - the plan search (search/plan_search.h): whole plans arranged and sized
+//   together, each turned back into an extended graph, labeling and dual;
+// - the graph-first route (plan/graph_first.h): extended graph (augment/),
+//   regular edge labelings (label/), rectangular dual (dual/), fitted into
+//   the footprint and sized (size/). It comes first when the brief names
+//   most contacts, else it is the fallback when the search finds no plan
+//   that meets the whole brief.
+// Then variants are ranked (variantScore), one kept per arrangement, and the
+// best gets its relaxations (plan/relaxations.h).
 //
-// Fitting: every room asks for a natural side of t·√(target area) in both
+// Fitting (graph-first): every room asks for a natural side of t·√(target area) in both
 // directions (never below its minWidth), door adjacencies for doorWidth of
 // shared wall, other contacts for `anyWall`. The longest-path layout of
 // these minimum extents is monotone in t, so t is found by bisection as the
@@ -9,7 +18,10 @@
 // footprint (stretching keeps every minimum). Rooms only roughly approach
 // their target areas here; core/size does the sizing.
 //
-// Running time: O((V + E) · log(1/ε)) after the extended graph.
+// Running time: bounded by PlanOptions::timeLimit when one is set;
+// otherwise by the search's move budget (200,000 + 60,000 moves per room
+// and chain, O(V + E) each), the graph-first budgets (layoutBudget,
+// flipBudget sizings) and the relaxation budget (1 s).
 #pragma once
 
 #include "plan/plan.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "plan/relaxations.h"
 
 #include "plan/plan_builder.h"

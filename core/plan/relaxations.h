@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // What must give: for each requirement a plan variant does not meet, the
 // smallest single changes to the brief that would meet it, each verified by
 // sizing the same arrangement again with the change made: a room's target

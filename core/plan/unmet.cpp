@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "plan/unmet.h"
 
 #include "search/requirements.h"

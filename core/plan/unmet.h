@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // What a plan variant does not meet, one item per requirement, in the
 // planner's words with amounts: a room off its area band, narrower than its
 // minimum width, beyond its aspect limit, away from a facade it wishes for;

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "plan/variant_key.h"
 
 #include <algorithm>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // A name for a variant's arrangement that survives re-computation and
 // re-sizing, so that the planner's pinned and hidden variants are found again:
 // FNV-1a (64 bit, hex) over the sorted list of room pairs that share a wall

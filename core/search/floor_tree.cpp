@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "search/floor_tree.h"
 
 #include <algorithm>

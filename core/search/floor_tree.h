@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // A whole plan as a tree: every leaf is a block (a room or a spare space),
 // every inner node divides its rectangle among its children — a cut in two
 // (slicing floorplans; Wong & Liu, "A new algorithm for floorplan design",

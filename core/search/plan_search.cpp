@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "search/plan_search.h"
 
 #include "detail/thread_pool.h"
@@ -901,11 +902,7 @@ bool ranksBefore(const SearchPlan& a, const SearchPlan& b) {
 std::vector<SearchPlan> sizeArrangement(const Brief& brief, const Footprint& fp, const SearchOptions& o,
                                         const std::vector<Rect>& rects, const SearchPlan& arrangement) {
     std::vector<SearchPlan> out;
-    SizingOptions so;
-    so.doorWidth = brief.doorWidth;
-    so.anyWall = o.anyWall;
-    so.spareMinimum = o.spareMinimum;
-    so.grid = o.grid;
+    const SizingOptions so = sizingOptionsFor(brief, o.anyWall, o.spareMinimum, o.grid);
     SizingProblem problem(brief, arrangement.extended, arrangement.labeling, fp, so);
     problem.setPreferredAreas(preferredAreas(brief, fp, arrangement.extended));
     const SizingResult start = problem.stateOf(rects);

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The plan search: whole plans, arranged and sized together.
 //
 // Method: simulated annealing (Kirkpatrick, Gelatt & Vecchi, Science 220,
@@ -46,8 +47,8 @@ struct SearchOptions {
     double timeLimit = 0;       // seconds (0 = none: the move budget ends the search)
     long long moves = 0;        // moves per chain (0 = 200,000 + 60,000 per room)
     int keep = 10;              // distinct arrangements returned at most
-    double anyWall = 0.05;      // m: shortest wall that counts as a contact
-    double spareMinimum = 0.3;  // m: smallest side of a spare space
+    double anyWall = minContactLength; // m: shortest wall that counts as a contact
+    double spareMinimum = minSpareSide; // m: smallest side of a spare space
     double grid = 0;            // m: planning module for walls (0 = none)
     bool stopWhenUsable = true; // stop at the first plan that meets the whole brief
     int variantFlips = -1;      // labeling flips of the best plan sized as variants (−1 = 3 × keep)

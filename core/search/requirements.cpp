@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "search/requirements.h"
 
 #include <algorithm>

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // What a plan must meet to be usable, measured on its room rectangles: every
 // room within its area band, at least its minimum width, at most its aspect
 // limit; every 'must' adjacency a shared wall (a door one at least doorWidth

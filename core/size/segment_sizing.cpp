@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 #include "size/segment_sizing.h"
 
 #include <cstdio>
@@ -17,6 +18,15 @@ SizingProblem::SizingProblem(const Brief& brief, const ExtendedGraph& x, const R
     target_.resize(brief.rooms.size());
     for (std::size_t i = 0; i < brief.rooms.size(); ++i) target_[i] = brief.rooms[i].area;
     wallMin_ = wallMinimums(brief, x, segs_, options.doorWidth, options.anyWall);
+}
+
+SizingOptions sizingOptionsFor(const Brief& brief, double anyWall, double spareMinimum, double grid) {
+    SizingOptions s;
+    s.doorWidth = brief.doorWidth;
+    s.anyWall = anyWall;
+    s.spareMinimum = spareMinimum;
+    s.grid = grid;
+    return s;
 }
 
 std::vector<double> wallMinimums(const Brief& brief, const ExtendedGraph& x, const SegmentStructure& segs,

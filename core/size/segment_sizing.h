@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Sizing a layout: positions of the maximal segments that bring every room to
 // its target area inside a fixed footprint.
 //
@@ -35,8 +36,8 @@ namespace abut {
 
 struct SizingOptions {
     double doorWidth = 0.9;     // m, shortest wall for a door adjacency
-    double anyWall = 0.3;       // m, shortest wall for any other contact
-    double spareMinimum = 0.3;  // m, smallest side of a spare space
+    double anyWall = minContactLength; // m, shortest wall for any other contact
+    double spareMinimum = minSpareSide; // m, smallest side of a spare space
     double spareWeight = 0.05;  // β
     double aspectWeight = 0.3;  // γ
     // Area bands (Room::tolerance): within its band a room's area costs only
@@ -61,6 +62,11 @@ struct UnmetRequirement {
     double wanted = 0, got = 0;
     std::string message;
 };
+
+// The options every layout of `brief` is sized with: its door width, the
+// contact and spare minimums and the planning grid (all stages use this).
+SizingOptions sizingOptionsFor(const Brief& brief, double anyWall = minContactLength,
+                               double spareMinimum = minSpareSide, double grid = 0);
 
 // Shortest length each wall of `segs` must keep: doorWidth between two rooms
 // with a door adjacency, anyWall otherwise.

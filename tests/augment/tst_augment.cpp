@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // From a brief to an extended graph: planarity witnesses, separating
 // triangles, facades, small and disconnected briefs, and the checker on
 // thousands of random briefs.

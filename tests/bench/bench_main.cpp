@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Abut's benchmarks. Prints one "name: value unit" line per figure.
 //   abut_bench            all sections
 //   abut_bench pipeline   extended graph → labeling → dual, against Boost's

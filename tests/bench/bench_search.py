@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Benchmark of the plan search (figures, not a test): for generated briefs of
 10, 30, 60, 100 and 200 rooms (read off plausible plans, tests/python/
 plan_briefs.py), the share that gets a usable best variant, the time to the

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Editing a brief, importing CSV, tidying the sketch (core side of the editor).
 #include "brief/brief_edit.h"
 #include "embed/straight_line_drawing.h"

@@ -1,4 +1,5 @@
 #!/usr/bin/env bash
+# SPDX-License-Identifier: MIT
 # abut-cli check: every sample is read (exit 0 or 3), every invalid project is
 # refused with exit 2 and a one-line message naming the file; a brief that
 # cannot fit its footprint loads but is reported (exit 3, the reason in the

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Regular edge labelings and rectangular duals: on random tilings (valid by
 // construction) and on random briefs, every labeling passes the local-rule
 // checker and every dual passes the tiling/contact checker; the checkers

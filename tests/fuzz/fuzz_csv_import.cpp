@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // libFuzzer target: the CSV importer (room list or adjacency matrix). Any
 // input is refused with located messages, or yields a brief that saves and
 // loads back unchanged.

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // libFuzzer target: the extended-graph loader. Any input is refused with a
 // message or yields a graph that passes checkExtendedGraph and has a regular
 // edge labeling that passes its checker.

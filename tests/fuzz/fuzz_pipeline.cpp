@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // libFuzzer target: the whole brief → plan pipeline. The input bytes are
 // read as a small brief (room count, areas, min widths, facade wishes,
 // adjacencies with kind and priority, footprint) so that every input is a

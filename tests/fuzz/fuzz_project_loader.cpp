@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // libFuzzer target: the project-file loader. Any input must either be
 // refused with at least one located message, or load into a brief whose
 // canonical text loads again to the same text (the round trip the editor

@@ -1,4 +1,5 @@
 #!/usr/bin/env bash
+# SPDX-License-Identifier: MIT
 # The editor opens every sample offscreen and renders a non-empty window image;
 # a bad file makes the screenshot mode exit 2 instead of drawing nothing.
 set -u

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The editor's first screen driven as a planner would: mouse on the sketch's
 // viewport, typing in the brief table, files, CSV import, live check and
 // recovery. Runs offscreen.

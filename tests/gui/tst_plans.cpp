@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The editor's plan side driven as a planner would: variants arriving in the
 // background while the window stays responsive, cancel, choosing and pinning
 // variants, dragging a wall, typing a target, exporting. Runs offscreen.

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Project file reading and writing: every valid file loads, every invalid file
 // is refused with its expected message, and load → save → load is stable.
 #include "io/atomic_file.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The lattice of regular edge labelings: counts against OEIS, the pinwheel,
 // validity and distinctness of everything listed, the cap, the seed, and
 // one-sided (area-universal) layouts.

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Steering the plan computation (progress, streaming, cancel) and the sizing
 // calls a wall drag uses (state of a layout, segment range, evaluate).
 #include "io/project_io.h"

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Property run over 10,000 random briefs with fixed seeds (20 batches): 1–200 rooms,
 // random facade wishes, door/wall and must/should mixes, some non-planar
 // (extra random adjacencies), some disconnected, some with targets far over

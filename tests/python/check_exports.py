@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Exports read back by independent tools, as a user's CAD and PDF viewer
 would: DXF through ezdxf (audit clean; $INSUNITS 6 for metres and 2 for feet,
 DXF reference as read by ezdxf; room polylines equal the plan's rectangles);

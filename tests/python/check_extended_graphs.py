@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Extended graphs written by `abut-cli extended`, checked independently with
 networkx: planar; 3V - 7 edges; the poles form the 4-cycle N-E-S-W with no
 chord; no separating triangle (removing a triangle's three vertices leaves

@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Hostile but fair input to abut-cli, checked from outside (CTest
 py_hostile_input):
 

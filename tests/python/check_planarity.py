@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Planarity of 2,000 seeded random graphs (5-60 vertices): Abut's core
 (Boyer-Myrvold via Boost) must agree with networkx's check_planarity, an
 independent implementation (networkx, left-right planarity test)."""

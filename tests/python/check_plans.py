@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Plan files written by `abut-cli plan`, checked independently with shapely
 (geometry) and networkx (graph facts): rooms and spare spaces tile the
 footprint with no overlap; every adjacency not listed in `dropped` is a

@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Acceptance of the plan search: briefs read off plausible building plans
 (plan_briefs.py; the drawn plan is the witness that an exact answer exists),
 planned by `abut-cli plan`, the best variant judged with shapely

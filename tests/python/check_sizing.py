@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Sizing against achievable briefs. Each brief is read off a random rectangle
 tiling made here (guillotine cuts at random positions, so no four rooms meet
 at a point): target areas are the tiling's areas, minimum widths 95 % of each

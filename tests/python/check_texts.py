@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """What abut-cli says agrees with the plan it draws (CTest py_plan_texts):
 
 - `check` on a brief whose targets exceed the footprint does not claim that

@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Draws a brief's witness or a plan variant as SVG (to look at by hand):
     draw_plan.py BRIEF.abut.json (WITNESS.json | PLAN.json [RANK]) OUT.svg
 Rooms are outlined and labelled with id and area deviation; 'must' doors that

@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Briefs read off plausible building plans drawn here, each kept with the plan
 it was read from (the witness), so an exact answer is known to exist.
 

@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """Whether a plan is usable for its brief, judged with shapely alone
 (independently of Abut's own checks): the rooms and spare spaces tile the
 footprint; every room is within 5 % of its target area (a planner's usual

@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: MIT
 """The clinic and office-floor samples, each read off a plan drawn here (the
 witness), so that an exact answer is known to exist; the plans are invented
 (room sizes are common practice, no source).

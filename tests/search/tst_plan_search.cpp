@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // The plan search stage: floor trees (layout exact to the areas, moves keep
 // the tree whole), the dual read off a tiling (checked by the stage
 // checkers), requirement misses, and the search itself (keeps every 'must'

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Sizing: exact on layouts whose targets are achievable, exact on one-sided
 // layouts for any targets, honest about what cannot be met, and usable for
 // dragging (ranges, locked segments, warm starts, the planning grid).

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Seeded generators of test briefs. Header-only; used by tests and benchmarks.
 #pragma once
 

@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Random rectangle tilings (slicing floorplans with split points drawn at
 // random, so no four rectangles meet at a point) and the extended graph read
 // off their geometry. Header-only; used by tests and benchmarks as a source

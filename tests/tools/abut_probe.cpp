@@ -1,3 +1,4 @@
+// SPDX-License-Identifier: MIT
 // Test helper: answers questions about graphs read from standard input, so
 // that Python checks can compare Abut's core with independent libraries.
 //   abut_probe planar   < {"graphs": [{"n": 5, "edges": [[0, 1], ...]}, ...]}
