@@ -23,6 +23,7 @@ namespace abut::gui {
 class BriefPanel;
 class Document;
 class PlanRunner;
+class PlanSession;
 class PlanView;
 class Recovery;
 class SchedulePanel;
@@ -39,11 +40,14 @@ struct MainWindowOptions {
 // The editor's window: the sketch (bubble diagram) and the brief panel edit
 // one Document (brief + undo stack); every edit restarts the live check
 // (LiveCheck, worker thread) and, after a pause, the plan computation
-// (PlanRunner). It holds the plan session — the variants of the last
-// computation, the one on show and the brief it was planned from, locked
-// rooms — and feeds the variants strip, the plan view, the area schedule and
-// the diagnostics list; a wall or target drag in the plan view comes back as
-// one undoable edit. Files, recovery, export and printing hang off its menus.
+// (PlanRunner).
+// The plan session (PlanSession: the variants, the one on show and the
+// brief it was planned from, locked rooms) is its own object; the window
+// passes it each new brief and the computation's results, and redraws the
+// strip, the plan view, the area schedule and the diagnostics list when it
+// signals. A wall or target drag in the plan view comes back as one undoable
+// edit. Files, recovery, export and printing hang off its menus
+// (main_window_actions.cpp).
 class MainWindow : public QMainWindow {
     Q_OBJECT
 public:
@@ -67,9 +71,10 @@ public:
     SchedulePanel* schedulePanel() const { return schedule_; }
     PlanRunner* planRunner() const { return runner_; }
     // The variant on show, as sized for the current brief.
-    bool hasCurrentVariant() const { return haveCurrent_; }
-    const PlanVariant& currentVariant() const { return current_; }
-    const std::vector<PlanVariant>& variants() const { return variants_; }
+    PlanSession* planSession() const { return session_; }
+    bool hasCurrentVariant() const;
+    const PlanVariant& currentVariant() const;
+    const std::vector<PlanVariant>& variants() const;
     bool exportCurrent(const QString& path, QString* error = nullptr);
     Recovery* recovery() const { return recovery_.get(); }
     // True while plans or the live check are being computed in the background.
@@ -118,9 +123,8 @@ private:
     void startPlanning();
     void variantFound(const PlanVariant& v, quint64 revision);
     void planFinished(const Plan& plan, quint64 revision);
-    void chooseVariant(const QString& key);
+    void variantsChanged();
     void showCurrent();
-    void resizeCurrent();
     void wallMoved(const PlanVariant& resized, const QString& description);
     void targetDragged(int room, double area, const PlanVariant& resized);
     void hoverRoom(const QString& id);
@@ -148,13 +152,7 @@ private:
     VariantsStrip* strip_ = nullptr;
     SchedulePanel* schedule_ = nullptr;
     LiveCheck check_;
-    std::vector<PlanVariant> variants_; // the strip's, best first (streamed until the plan is done)
-    PlanVariant current_;               // on show, sized for planBrief_
-    bool haveCurrent_ = false, currentStale_ = false, keepLayoutOnce_ = false;
-    bool chosenByPlanner_ = false; // picked in the strip, not just the best so far
-    Brief planBrief_;
-    Footprint planFootprint_;
-    std::set<int> locked_;
+    PlanSession* session_ = nullptr; // the variants, the one on show, locked rooms
     bool syncing_ = false;
 };
 

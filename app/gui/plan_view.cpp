@@ -2,6 +2,7 @@
 #include "plan_view.h"
 
 #include "palette.h"
+#include "plan_session.h"
 #include "plan/plan_builder.h"
 #include "plan/relaxations.h"
 #include "plan/unmet.h"
@@ -129,17 +130,26 @@ void PlanView::setShowDimensions(bool on) {
     update();
 }
 
-void PlanView::setLockedRooms(const std::set<int>& rooms) {
-    locked_ = rooms;
-    rebuildProblem();
-    update();
+void PlanView::setSession(const PlanSession* session) {
+    if (session_) disconnect(session_, nullptr, this, nullptr);
+    session_ = session;
+    if (session_)
+        connect(session_, &PlanSession::lockedChanged, this, [this] {
+            rebuildProblem();
+            update();
+        });
+}
+
+const std::set<int>& PlanView::locked() const {
+    static const std::set<int> none;
+    return session_ ? session_->lockedRooms() : none;
 }
 
 void PlanView::rebuildProblem() {
     problem_.reset();
     if (!has_ || v_.extended.graph.vertexCount() == 0 || v_.rooms.size() != brief_.rooms.size()) return;
     SizingOptions o = planSizingOptions(brief_);
-    o.lockedRooms.assign(locked_.begin(), locked_.end());
+    o.lockedRooms.assign(locked().begin(), locked().end());
     planned_ = plannedBrief(brief_);
     problem_ = std::make_unique<SizingProblem>(planned_, v_.extended, v_.labeling, fp_, o);
     state_ = problem_->stateOf(vertexRects(v_));
@@ -170,7 +180,7 @@ std::vector<PlanView::Handle> PlanView::handles() const {
                 const Rect& r = state_.rects[u];
                 h.from = std::min(h.from, vertical ? r.y0 : r.x0);
                 h.to = std::max(h.to, vertical ? r.y1 : r.x1);
-                lockedSide = lockedSide || (u < int(brief_.rooms.size()) && locked_.count(u));
+                lockedSide = lockedSide || (u < int(brief_.rooms.size()) && locked().count(u));
             }
             if (lockedSide || h.from > h.to) continue;
             std::tie(h.lo, h.hi) = problem_->segmentRange(state_, vertical, k);
@@ -235,7 +245,7 @@ void PlanView::mousePressEvent(QMouseEvent* event) {
         const QString id = roomAt(at);
         if (id.isEmpty()) return;
         dragRoom_ = brief_.roomIndex(id.toStdString());
-        if (locked_.count(dragRoom_)) return; // its size is held
+        if (locked().count(dragRoom_)) return; // its size is held
         drag_ = Drag::Target;
         dragStartY_ = at.y();
         dragStartArea_ = dragArea_ = brief_.rooms[dragRoom_].area;
@@ -326,7 +336,7 @@ void PlanView::contextMenuEvent(QContextMenuEvent* event) {
     const int room = brief_.roomIndex(id.toStdString());
     QMenu menu(this);
     const QString name = QString::fromStdString(brief_.rooms[room].displayName());
-    QAction* lock = menu.addAction(locked_.count(room) ? tr("Unlock size of %1").arg(name) : tr("Lock size of %1").arg(name));
+    QAction* lock = menu.addAction(locked().count(room) ? tr("Unlock size of %1").arg(name) : tr("Lock size of %1").arg(name));
     if (menu.exec(event->globalPos()) == lock) emit lockToggled(room);
 }
 
@@ -428,7 +438,7 @@ void PlanView::paintEvent(QPaintEvent*) {
                            sm.elidedText(QStringLiteral("\u2192 ") + hint_[i], Qt::ElideRight, box.width() - 8));
             }
         }
-        if (locked_.count(int(i))) {
+        if (locked().count(int(i))) {
             QFont small = font();
             small.setPixelSize(10);
             p.setFont(small);

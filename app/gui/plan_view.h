@@ -13,6 +13,8 @@
 
 namespace abut::gui {
 
+class PlanSession;
+
 // The selected variant to scale, north up: rooms with their names and
 // achieved area against the target ("12.4 of 14 m², −11 %" with an arrow
 // down or up, so the deviation reads without colour), spare spaces hatched,
@@ -41,7 +43,8 @@ public:
     void setHighlightedRoom(const QString& id);
     const QString& highlightedRoom() const { return highlighted_; }
     void setShowDimensions(bool on);
-    void setLockedRooms(const std::set<int>& rooms);
+    // The session whose locked rooms the view honours (and shows).
+    void setSession(const PlanSession* session);
     // Planning module walls snap to while dragged (0 = none), plan units.
     void setGrid(double module) { grid_ = module; }
 
@@ -92,7 +95,8 @@ private:
     QString message_;
     QString hovered_, highlighted_;
     bool dimensions_ = false;
-    std::set<int> locked_;
+    const PlanSession* session_ = nullptr;
+    const std::set<int>& locked() const; // the session's locked rooms
     std::vector<QStringList> notes_; // per room: unmet, held by, would meet (see roomNotes)
     std::vector<QString> hint_;      // per room: the first change that would meet its misses
     std::unique_ptr<SizingProblem> problem_;
