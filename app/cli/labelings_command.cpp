@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: MIT
 #include "cli_commands.h"
 
+#include "dual/rectangular_dual.h"
 #include "io/extended_graph_io.h"
 #include "label/labeling_lattice.h"
 

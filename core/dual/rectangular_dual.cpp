@@ -217,4 +217,26 @@ DualCheck checkRectangularDual(const ExtendedGraph& x, const std::vector<Rect>& 
     return {};
 }
 
+bool isOneSided(const ExtendedGraph& x, const RegularEdgeLabeling& rel) {
+    const SegmentStructure s = maximalSegments(x, rel);
+    std::vector<int> westOf(s.verticalCount, 0), eastOf(s.verticalCount, 0);
+    std::vector<int> southOf(s.horizontalCount, 0), northOf(s.horizontalCount, 0);
+    for (int v = 0; v < x.graph.vertexCount(); ++v) {
+        if (x.isPole(v)) continue;
+        ++westOf[s.east[v]]; // v lies west of its east segment
+        ++eastOf[s.west[v]];
+        ++southOf[s.north[v]];
+        ++northOf[s.south[v]];
+    }
+    for (int k = 0; k < s.verticalCount; ++k) {
+        if (k == s.westSegment || k == s.eastSegment) continue;
+        if (westOf[k] != 1 && eastOf[k] != 1) return false;
+    }
+    for (int k = 0; k < s.horizontalCount; ++k) {
+        if (k == s.southSegment || k == s.northSegment) continue;
+        if (southOf[k] != 1 && northOf[k] != 1) return false;
+    }
+    return true;
+}
+
 } // namespace abut

@@ -52,6 +52,11 @@ struct SegmentStructure {
 
 SegmentStructure maximalSegments(const ExtendedGraph& x, const RegularEdgeLabeling& rel);
 
+// One-sided layout: every maximal segment is a whole side of some room. Such
+// layouts are area-universal: any area targets can be met exactly (Eppstein,
+// Mumford, Speckmann & Verbeek 2012). O(V + E).
+bool isOneSided(const ExtendedGraph& x, const RegularEdgeLabeling& rel);
+
 // Minimum extents, in plan units: per vertex (rooms and spares; poles ignored;
 // empty = 1 each) and per wall (index into SegmentStructure::walls). Every wall
 // gets at least `anyWall`: without it two rooms that should meet could touch at

@@ -96,9 +96,4 @@ private:
 // Counts labelings, stopping at `cap` (returns cap then).
 std::uint64_t countLabelings(const ExtendedGraph& x, const RegularEdgeLabeling& any, std::uint64_t cap);
 
-// One-sided layout: every maximal segment is a whole side of some room. Such
-// layouts are area-universal: any area targets can be met exactly (Eppstein,
-// Mumford, Speckmann & Verbeek 2012). O(V + E).
-bool isOneSided(const ExtendedGraph& x, const RegularEdgeLabeling& rel);
-
 } // namespace abut

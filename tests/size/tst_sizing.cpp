@@ -3,6 +3,7 @@
 // layouts for any targets, honest about what cannot be met, and usable for
 // dragging (ranges, locked segments, warm starts, the planning grid).
 #include "augment/augment.h"
+#include "dual/rectangular_dual.h"
 #include "label/labeling_lattice.h"
 #include "size/segment_sizing.h"
 #include "../support/random_briefs.h"
