@@ -10,14 +10,36 @@ namespace abut {
 
 enum class Severity { Info, Warning, Error };
 
+// What a diagnostic is about: stable, and written as its string (toString,
+// e.g. "dropped-adjacency") where a file or `check --json` shows it.
+enum class DiagnosticCode {
+    Note,               // a remark with no code of its own
+    Feasible,           // the brief can be planned as it is
+    NonPlanar,          // adjacencies that cross: a Kuratowski witness
+    DroppedAdjacency,   // an adjacency given up (and why)
+    AddedContact,       // an extra wall added to complete the graph (costs the brief nothing)
+    SpareSpace,         // spare spaces the plan needs
+    CoverApproximate,   // separating triangles broken by an approximate cover
+    FacadeConflict,     // facade wishes that cannot all be met
+    FacadeUnmet,        // a room that misses the facade it wishes for
+    FacadeTooShort,     // rooms that wish one facade need more of it than it is long
+    OverFootprint,      // targets add up to more than the footprint
+    WiderThanFootprint, // a room's minimum width exceeds the footprint
+    ShortDoorWall,      // door adjacencies with less than a door's width of wall
+    SketchCrossing,     // adjacency lines that cross in the sketch
+    Unmet,              // a requirement the plan on show does not meet
+    Relaxation,         // a change to the brief that would meet one
+};
+
 struct Diagnostic {
     Severity severity = Severity::Info;
-    std::string code;             // stable, machine-readable: "dropped-adjacency", ...
+    DiagnosticCode code = DiagnosticCode::Note;
     std::string message;          // one sentence or two, room names not ids
     std::vector<int> rooms;       // indices into Brief::rooms
     std::vector<int> adjacencies; // indices into Brief::adjacencies
 };
 
 const char* toString(Severity s);
+const char* toString(DiagnosticCode c);
 
 } // namespace abut

@@ -109,7 +109,7 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
             OrderedJson adjs = OrderedJson::array();
             for (int a : d.adjacencies)
                 adjs.push_back({brief.adjacencies[a].a, brief.adjacencies[a].b});
-            diags.push_back({{"severity", toString(d.severity)}, {"code", d.code},
+            diags.push_back({{"severity", toString(d.severity)}, {"code", toString(d.code)},
                              {"message", d.message}, {"rooms", idsOf(d.rooms)},
                              {"adjacencies", adjs}});
         }
@@ -137,11 +137,11 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     }
     out << "\n" << summary << "\n";
     for (const Diagnostic& d : diagnostics) {
-        if (d.severity == Severity::Info && d.code == "added-contact") continue;
+        if (d.severity == Severity::Info && d.code == DiagnosticCode::AddedContact) continue;
         out << "  " << toString(d.severity) << ": " << d.message << "\n";
     }
     int added = 0;
-    for (const Diagnostic& d : plan.diagnostics) added += d.code == "added-contact";
+    for (const Diagnostic& d : plan.diagnostics) added += d.code == DiagnosticCode::AddedContact;
     if (added > 0)
         out << "  info: " << added << " wall(s) the brief did not ask for are added to close the plan"
             << " (use --json for the list).\n";

@@ -42,7 +42,7 @@ LiveCheck runLiveCheck(const Brief& brief, quint64 revision) {
         if (!crossings.empty()) {
             Diagnostic d;
             d.severity = Severity::Info;
-            d.code = "sketch-crossing";
+            d.code = DiagnosticCode::SketchCrossing;
             d.message = QCoreApplication::translate(
                             "LiveCheck", "%n pair(s) of adjacency lines cross in the sketch. Planning still works; "
                                          "Tidy up redraws the sketch without crossings when the brief allows it.",
@@ -68,7 +68,7 @@ LiveCheck runLiveCheck(const Brief& brief, quint64 revision) {
         o.searchSeconds = 1.5;
         const AugmentResult aug = checkBrief(brief, o).arrangement;
         for (const Diagnostic& d : aug.diagnostics) {
-            if (d.code == "added-contact") continue; // extra walls cost the brief nothing
+            if (d.code == DiagnosticCode::AddedContact) continue; // extra walls cost the brief nothing
             out.diagnostics.push_back(d);
             if (d.severity == Severity::Info) continue;
             out.marks.rooms.insert(d.rooms.begin(), d.rooms.end());
@@ -76,7 +76,7 @@ LiveCheck runLiveCheck(const Brief& brief, quint64 revision) {
         }
         if (aug.status == AugmentStatus::Feasible && out.diagnostics.empty()) {
             Diagnostic ok;
-            ok.code = "feasible";
+            ok.code = DiagnosticCode::Feasible;
             ok.message = QCoreApplication::translate(
                              "LiveCheck", "Every must adjacency and facade wish can be met by a rectangular plan.")
                              .toStdString();

@@ -240,7 +240,7 @@ void MainWindow::showDiagnostics() {
             QStringList heldList;
             for (const std::string& h : held) heldList << QString::fromStdString(h);
             if (!heldList.isEmpty()) text += tr(" \u2014 held there by %1").arg(heldList.join(QStringLiteral("; ")));
-            Diagnostic d{Severity::Warning, "unmet", text.toStdString(), u.rooms, {}};
+            Diagnostic d{Severity::Warning, DiagnosticCode::Unmet, text.toStdString(), u.rooms, {}};
             if (u.adjacency >= 0) d.adjacencies = {u.adjacency};
             all.push_back(d);
         }
@@ -257,7 +257,7 @@ void MainWindow::showDiagnostics() {
             return rooms;
         };
         for (const Relaxation& r : current_.relaxations)
-            all.push_back({Severity::Info, "relaxation",
+            all.push_back({Severity::Info, DiagnosticCode::Relaxation,
                            tr("Would meet \u201c%1\u201d%3: %2")
                                .arg(QString::fromStdString(r.meets.front()), QString::fromStdString(r.text),
                                     r.meets.size() > 1 ? tr(" and %n more", nullptr, int(r.meets.size() - 1)) : QString())

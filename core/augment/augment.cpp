@@ -26,14 +26,6 @@ const char* toString(AugmentStatus s) {
     return "?";
 }
 
-const char* toString(Severity s) {
-    switch (s) {
-    case Severity::Info: return "info";
-    case Severity::Warning: return "warning";
-    case Severity::Error: return "error";
-    }
-    return "?";
-}
 
 namespace {
 
@@ -81,7 +73,7 @@ private:
         const auto it = briefEdge_.find(ordered(u, v));
         return it == briefEdge_.end() ? -1 : it->second;
     }
-    void note(Severity sev, std::string code, std::string message, std::vector<int> rooms,
+    void note(Severity sev, DiagnosticCode code, std::string message, std::vector<int> rooms,
               std::vector<int> adjacencies = {}) {
         std::sort(rooms.begin(), rooms.end());
         rooms.erase(std::unique(rooms.begin(), rooms.end()), rooms.end());
@@ -102,7 +94,7 @@ private:
     bool embedWithFacades(const std::vector<std::pair<int, int>>& edges, PlaneGraph& out) const;
     void reportAddedContacts(const std::vector<Edge>& added, const char* why);
     void noteSpares(int count) {
-        note(Severity::Info, "spare-space",
+        note(Severity::Info, DiagnosticCode::SpareSpace,
              "The plan needs " + std::to_string(count) +
                  " spare space(s): gaps where no further wall between rooms could be added.",
              {});
@@ -170,7 +162,7 @@ PlaneGraph Builder::embedDroppingCrossings() {
             for (const auto& [v, d] : degree) deg4 += d == 4;
             std::string list;
             for (std::size_t i = 0; i < adjs.size(); ++i) list += (i ? "; " : "") + describe(adjs[i]);
-            note(Severity::Error, "non-planar",
+            note(Severity::Error, DiagnosticCode::NonPlanar,
                  "These adjacencies cannot all be drawn on one floor without two of them crossing "
                  "(they contain the pattern of " + std::string(deg4 >= 5 ? "five rooms all touching each other, K5" :
                  "two groups of three rooms each touching all of the other group, K3,3") + "): " + list + ".",
@@ -178,7 +170,7 @@ PlaneGraph Builder::embedDroppingCrossings() {
             firstWitness = false;
         }
         const int drop = edgeAdj[cheapest];
-        note(Severity::Warning, "dropped-adjacency",
+        note(Severity::Warning, DiagnosticCode::DroppedAdjacency,
              "Dropped " + describe(drop) + " so that the rest can be drawn without crossings.",
              {edges[cheapest].first, edges[cheapest].second}, {drop});
         edges.erase(edges.begin() + cheapest);
@@ -247,7 +239,7 @@ bool Builder::embedWithFacades(const std::vector<std::pair<int, int>>& edges, Pl
 
 void Builder::reportAddedContacts(const std::vector<Edge>& added, const char* why) {
     for (const auto& [u, v] : added)
-        note(Severity::Info, "added-contact",
+        note(Severity::Info, DiagnosticCode::AddedContact,
              name(u) + " and " + name(v) + " share a wall the brief did not ask for (" + why + ").",
              {u, v});
 }
@@ -284,7 +276,7 @@ bool Builder::breakSeparatingTriangles(PlaneGraph& g, const std::vector<int>& ou
     if (sep.empty()) return false;
     const Cover cover = cheapestCover(sep, [this](int u, int v) { return cost(u, v); });
     if (!cover.exact)
-        note(Severity::Info, "cover-approximate",
+        note(Severity::Info, DiagnosticCode::CoverApproximate,
              "Many rooms enclose each other here; the adjacencies to give up were chosen greedily and may "
              "not be the fewest possible.",
              {});
@@ -314,7 +306,7 @@ bool Builder::breakSeparatingTriangles(PlaneGraph& g, const std::vector<int>& ou
                   " all touch each other around other rooms; rectangles cannot enclose rooms that "
                   "way (a separating triangle)";
         }
-        note(Severity::Warning, "dropped-adjacency",
+        note(Severity::Warning, DiagnosticCode::DroppedAdjacency,
              why + ". Dropped " + describe(adj) + "; to keep it, let one of these pairs meet through "
                    "another room or make it 'should'.",
              rooms, {adj});
@@ -428,7 +420,7 @@ CornerSearch Builder::relaxFacadeWishes(const PlaneGraph& g, const std::vector<i
     for (const std::vector<int>& ignored : tries) {
         CornerSearch s = without(ignored);
         if (s.assignments.empty()) continue;
-        note(Severity::Warning, "facade-conflict",
+        note(Severity::Warning, DiagnosticCode::FacadeConflict,
              "The facade sides asked for " + roomList(sided) +
                  " cannot all be met at once; the plan gives up the sides of " + roomList(ignored) + ".",
              ignored);
@@ -593,7 +585,7 @@ AugmentResult Builder::run() {
             const int adj = adjacencyIndex(chord.first, chord.second);
             g.removeEdge(chord.first, chord.second);
             if (adj >= 0)
-                note(Severity::Warning, "dropped-adjacency",
+                note(Severity::Warning, DiagnosticCode::DroppedAdjacency,
                      "Dropped " + describe(adj) + ": with it, the rooms on the outline could not be "
                      "split into four facade sides.",
                      {chord.first, chord.second}, {adj});
@@ -736,7 +728,7 @@ void Builder::considerPoleRoute(const PlaneGraph& rooms, std::size_t sharedNotes
     for (std::size_t i = 0; i < brief_.adjacencies.size(); ++i) {
         const int a = brief_.roomIndex(brief_.adjacencies[i].a), b = brief_.roomIndex(brief_.adjacencies[i].b);
         if (rooms.hasEdge(a, b) && !result_.extended.graph.hasEdge(a, b))
-            note(Severity::Warning, "dropped-adjacency",
+            note(Severity::Warning, DiagnosticCode::DroppedAdjacency,
                  "Dropped " + describe(static_cast<int>(i)) +
                      ": with it, some rooms would enclose others (a separating triangle).",
                  {a, b}, {static_cast<int>(i)});
@@ -760,7 +752,7 @@ void Builder::finish() {
         std::string sides;
         for (Side s : allSides)
             if (wishes_[v].has(s)) sides += sides.empty() ? std::string(1, sideLetter(s)) : std::string(", ") + sideLetter(s);
-        note(Severity::Warning, "facade-unmet",
+        note(Severity::Warning, DiagnosticCode::FacadeUnmet,
              name(v) + " does not reach " + (sides.empty() ? std::string("an outside wall") : "the " + sides + " facade") +
                  " in this plan.",
              {v});

@@ -25,7 +25,7 @@ std::vector<Diagnostic> footprintProblems(const Brief& brief) {
     if (total > available * (1.0 + 1e-9)) {
         Diagnostic d;
         d.severity = Severity::Error;
-        d.code = "over-footprint";
+        d.code = DiagnosticCode::OverFootprint;
         d.message = "The rooms' target areas add up to " + formatNumber(total) + " " + u +
                     "\xC2\xB2, more than the footprint's " + formatNumber(available) + " " + u + "\xC2\xB2 (" +
                     formatNumber(fp.width) + " \xC3\x97 " + formatNumber(fp.depth) +
@@ -37,7 +37,7 @@ std::vector<Diagnostic> footprintProblems(const Brief& brief) {
         if (room.minWidth && *room.minWidth > std::max(fp.width, fp.depth)) {
             Diagnostic d;
             d.severity = Severity::Error;
-            d.code = "wider-than-footprint";
+            d.code = DiagnosticCode::WiderThanFootprint;
             d.message = room.displayName() + " needs a width of " + formatNumber(*room.minWidth) + " " + u +
                         ", wider than the footprint.";
             d.rooms = {static_cast<int>(i)};
@@ -62,7 +62,7 @@ std::vector<Diagnostic> footprintProblems(const Brief& brief) {
         static const char* names[] = {"north", "east", "south", "west"};
         Diagnostic d;
         d.severity = Severity::Warning;
-        d.code = "facade-too-short";
+        d.code = DiagnosticCode::FacadeTooShort;
         d.message = "The " + std::to_string(rooms.size()) + " rooms that wish the " + names[static_cast<int>(side)] +
                     " facade alone need " + formatNumber(need) + " " + u + " of it at their minimum widths; the facade is " +
                     formatNumber(length) + " " + u + ": lengthen it by " + formatNumber(std::ceil((need - length) * 100 - 1e-6) / 100) +

@@ -13,8 +13,8 @@
 
 namespace abut {
 
-// Error diagnostics, codes "over-footprint" and "wider-than-footprint"; a
-// warning "facade-too-short" when the rooms that wish one side alone need
+// Error diagnostics, codes OverFootprint and WiderThanFootprint; a
+// warning FacadeTooShort when the rooms that wish one side alone need
 // more of it at their minimum widths than it is long.
 std::vector<Diagnostic> footprintProblems(const Brief& brief);
 

@@ -37,7 +37,7 @@ BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options) {
     if (aug.status != AugmentStatus::Compromised || options.searchMoves < 0 || options.searchSeconds <= 0) return out;
     // A 'must' graph that is not planar cannot be drawn by any plan.
     for (const Diagnostic& d : aug.diagnostics)
-        if (d.code == "non-planar") return out;
+        if (d.code == DiagnosticCode::NonPlanar) return out;
     SearchOptions search;
     search.threads = 1;
     search.moves = options.searchMoves > 0 ? options.searchMoves
@@ -68,8 +68,8 @@ BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options) {
     // What the augmentation gave up is not given up after all.
     std::erase_if(aug.diagnostics, [](const Diagnostic& d) {
         // (added contacts belonged to the augmentation's graph, not to the plan found)
-        return d.code == "dropped-adjacency" || d.code == "facade-conflict" || d.code == "facade-unmet" ||
-               d.code == "added-contact";
+        return d.code == DiagnosticCode::DroppedAdjacency || d.code == DiagnosticCode::FacadeConflict || d.code == DiagnosticCode::FacadeUnmet ||
+               d.code == DiagnosticCode::AddedContact;
     });
     aug.summary = aug.dropped.empty()
                       ? "A rectangular plan exists with every adjacency and facade wish."

@@ -276,8 +276,8 @@ void reconcileDiagnostics(const Brief& brief, const PlanVariant& best, std::vect
         if (brief.adjacencies[d].priority == Priority::Must) droppedMusts.push_back(d);
     std::vector<Diagnostic> out;
     for (Diagnostic d : diagnostics) {
-        if (d.code == "facade-unmet" || (d.code == "facade-conflict" && best.unmetFacade.empty())) continue;
-        if (d.code == "dropped-adjacency") {
+        if (d.code == DiagnosticCode::FacadeUnmet || (d.code == DiagnosticCode::FacadeConflict && best.unmetFacade.empty())) continue;
+        if (d.code == DiagnosticCode::DroppedAdjacency) {
             const bool same = std::all_of(d.adjacencies.begin(), d.adjacencies.end(), [&](int a) {
                 return std::find(best.dropped.begin(), best.dropped.end(), a) != best.dropped.end();
             });
@@ -302,7 +302,7 @@ void reconcileDiagnostics(const Brief& brief, const PlanVariant& best, std::vect
         out.push_back(std::move(d));
     }
     for (int r : best.unmetFacade)
-        out.push_back({Severity::Warning, "facade-unmet",
+        out.push_back({Severity::Warning, DiagnosticCode::FacadeUnmet,
                        brief.rooms[r].displayName() + " does not reach the facade it wishes for in the best variant.",
                        {r}, {}});
     diagnostics = std::move(out);
@@ -419,7 +419,7 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
     bool mustLost = !v.unmetFacade.empty();
     for (int d : v.dropped) mustLost = mustLost || brief.adjacencies[d].priority == Priority::Must;
     if (v.metrics.shortDoorWalls > 0)
-        plan.diagnostics.push_back({Severity::Warning, "short-door-wall",
+        plan.diagnostics.push_back({Severity::Warning, DiagnosticCode::ShortDoorWall,
                                     std::to_string(v.metrics.shortDoorWalls) +
                                         " door adjacency(ies) get less than a door's width of wall in the footprint.",
                                     {}, {}});

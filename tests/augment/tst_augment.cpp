@@ -34,7 +34,7 @@ std::vector<std::pair<int, int>> completeBipartite33() {
     return e;
 }
 
-bool hasCode(const AugmentResult& r, const std::string& code) {
+bool hasCode(const AugmentResult& r, DiagnosticCode code) {
     return std::any_of(r.diagnostics.begin(), r.diagnostics.end(),
                        [&](const Diagnostic& d) { return d.code == code; });
 }
@@ -98,9 +98,9 @@ void TestAugment::nonPlanarBriefDropsTheCheapest() {
     b.adjacencies[7].kind = AdjacencyKind::Wall;
     const AugmentResult r = buildExtendedGraph(b);
     QVERIFY(r.status != AugmentStatus::Internal);
-    QVERIFY(hasCode(r, "non-planar"));
+    QVERIFY(hasCode(r, DiagnosticCode::NonPlanar));
     const auto& d = *std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
-                                  [](const Diagnostic& x) { return x.code == "non-planar"; });
+                                  [](const Diagnostic& x) { return x.code == DiagnosticCode::NonPlanar; });
     QVERIFY(QString::fromStdString(d.message).contains("K5"));
     QVERIFY(std::count(r.dropped.begin(), r.dropped.end(), 7) == 1);
 }
@@ -121,7 +121,7 @@ void TestAugment::fourWayStudioSample() {
     const AugmentResult r = buildExtendedGraph(l.brief);
     QCOMPARE(r.status, AugmentStatus::Compromised);
     const auto it = std::find_if(r.diagnostics.begin(), r.diagnostics.end(),
-                                 [](const Diagnostic& d) { return d.code == "dropped-adjacency"; });
+                                 [](const Diagnostic& d) { return d.code == DiagnosticCode::DroppedAdjacency; });
     QVERIFY(it != r.diagnostics.end());
     const QString msg = QString::fromStdString(it->message);
     QVERIFY2(msg.contains("must all touch each other"), qPrintable(msg));
@@ -153,7 +153,7 @@ void TestAugment::disconnectedBrief() {
     const AugmentResult r = buildExtendedGraph(b);
     QCOMPARE(r.status, AugmentStatus::Feasible);
     QVERIFY(r.dropped.empty());
-    QVERIFY(hasCode(r, "added-contact"));
+    QVERIFY(hasCode(r, DiagnosticCode::AddedContact));
     QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
     const Brief none = briefFromEdges(5, {});
     const AugmentResult r2 = buildExtendedGraph(none);
@@ -202,7 +202,7 @@ void TestAugment::facadeConflictNamed() {
     b.rooms[2].facade.add(Side::W);
     const AugmentResult r = buildExtendedGraph(b);
     QCOMPARE(r.status, AugmentStatus::Compromised);
-    QVERIFY(hasCode(r, "facade-conflict"));
+    QVERIFY(hasCode(r, DiagnosticCode::FacadeConflict));
     QVERIFY(!r.unmetFacade.empty());
     QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
 }
@@ -235,7 +235,7 @@ void TestAugment::roomAcrossTheFloor() {
     QCOMPARE(r.status, AugmentStatus::Feasible);
     QVERIFY(r.dropped.empty());
     QVERIFY(r.unmetFacade.empty());
-    QVERIFY(!hasCode(r, "facade-conflict"));
+    QVERIFY(!hasCode(r, DiagnosticCode::FacadeConflict));
     QVERIFY(checkExtendedGraph(r.extended, b, r.dropped).ok);
     for (int v = 0; v < 5; ++v)
         for (Side s : wishes[v]) QVERIFY(r.extended.graph.hasEdge(v, r.extended.pole(s)));

@@ -337,7 +337,7 @@ private slots:
         QListWidgetItem* witness = nullptr;
         int at = -1;
         for (int i = 0; i < int(w.lastCheck().diagnostics.size()); ++i)
-            if (w.lastCheck().diagnostics[i].code == "non-planar") at = i;
+            if (w.lastCheck().diagnostics[i].code == DiagnosticCode::NonPlanar) at = i;
         QVERIFY(at >= 0);
         witness = list->item(at);
         QVERIFY(witness->text().contains(QStringLiteral("K5")));

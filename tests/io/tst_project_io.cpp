@@ -424,7 +424,7 @@ void TestProjectIo::facadeTooShortForItsRooms() {
     auto shortFacade = [](const Brief& brief) {
         std::vector<Diagnostic> out;
         for (const Diagnostic& d : footprintProblems(brief))
-            if (d.code == "facade-too-short") out.push_back(d);
+            if (d.code == DiagnosticCode::FacadeTooShort) out.push_back(d);
         return out;
     };
     std::vector<Diagnostic> d = shortFacade(b);
