@@ -761,7 +761,7 @@ void Builder::finish() {
     for (int d : result_.dropped) mustLost = mustLost || brief_.adjacencies[d].priority == Priority::Must;
     result_.status = (mustLost || !result_.unmetFacade.empty()) ? AugmentStatus::Compromised
                                                                 : AugmentStatus::Feasible;
-    const GraphCheck check = checkExtendedGraph(x, brief_, result_.dropped);
+    const StageCheck check = checkExtendedGraph(x, brief_, result_.dropped);
     if (!check.ok) {
         result_.status = AugmentStatus::Internal;
         result_.summary = "Internal error: the extended graph failed its check (" + check.problem +

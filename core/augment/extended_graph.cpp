@@ -20,9 +20,9 @@ void nameVertices(ExtendedGraph& x, const std::vector<std::string>& roomIds) {
     for (int i = 0; i < x.spareCount(); ++i) x.names.push_back(unique("spare" + std::to_string(i + 1)));
 }
 
-GraphCheck checkExtendedGraph(const ExtendedGraph& x) {
+StageCheck checkExtendedGraph(const ExtendedGraph& x) {
     const PlaneGraph& g = x.graph;
-    auto fail = [](std::string why) { return GraphCheck{false, std::move(why)}; };
+    auto fail = [](std::string why) { return StageCheck{false, std::move(why)}; };
     if (x.roomCount < 1) return fail("no rooms");
     if (g.vertexCount() < x.roomCount + 4) return fail("poles missing");
     if (static_cast<int>(x.names.size()) != g.vertexCount()) return fail("names do not match vertices");
@@ -62,9 +62,9 @@ GraphCheck checkExtendedGraph(const ExtendedGraph& x) {
     return {};
 }
 
-GraphCheck checkExtendedGraph(const ExtendedGraph& x, const Brief& brief,
+StageCheck checkExtendedGraph(const ExtendedGraph& x, const Brief& brief,
                               const std::vector<int>& dropped) {
-    GraphCheck c = checkExtendedGraph(x);
+    StageCheck c = checkExtendedGraph(x);
     if (!c.ok) return c;
     if (x.roomCount != static_cast<int>(brief.rooms.size()))
         return {false, "room count differs from the brief"};

@@ -9,6 +9,7 @@
 // S, W, then spare spaces.
 #pragma once
 
+#include "check.h"
 #include "brief/brief.h"
 #include "graph/plane_graph.h"
 
@@ -35,20 +36,15 @@ struct ExtendedGraph {
 // a pole or spare name that a room id already uses gets a "~" suffix.
 void nameVertices(ExtendedGraph& x, const std::vector<std::string>& roomIds);
 
-struct GraphCheck {
-    bool ok = true;
-    std::string problem; // what is wrong, for tests and debug builds
-};
-
 // Checker: the outer face is N, E, S, W (clockwise, traced from dart N→E),
 // the poles carry no chord, every other face is a triangle, no 3-cycle is
 // anything but a face, the graph is simple and its rotation system planar
 // (Euler: V − E + F = 2, and E = 3V − 7). O(V + E·d).
-GraphCheck checkExtendedGraph(const ExtendedGraph& x);
+StageCheck checkExtendedGraph(const ExtendedGraph& x);
 
 // Also checks against the brief: every adjacency of `brief` is an edge of `x`
 // unless its index is in `dropped`.
-GraphCheck checkExtendedGraph(const ExtendedGraph& x, const Brief& brief,
+StageCheck checkExtendedGraph(const ExtendedGraph& x, const Brief& brief,
                               const std::vector<int>& dropped);
 
 } // namespace abut

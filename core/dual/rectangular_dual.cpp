@@ -150,7 +150,7 @@ DualLayout longestPathLayout(const ExtendedGraph& x, const SegmentStructure& s, 
     return layout;
 }
 
-DualCheck checkRectangularDual(const ExtendedGraph& x, const std::vector<Rect>& rects, double width,
+StageCheck checkRectangularDual(const ExtendedGraph& x, const std::vector<Rect>& rects, double width,
                                double depth, double tol) {
     const int n = x.graph.vertexCount();
     auto name = [&](int v) { return x.names[v]; };

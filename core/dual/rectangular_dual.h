@@ -17,6 +17,7 @@
 // Running time: O(V + E) (union-find with path halving, Kahn's topological order).
 #pragma once
 
+#include "check.h"
 #include "augment/extended_graph.h"
 #include "label/regular_edge_labeling.h"
 
@@ -80,16 +81,11 @@ DualLayout longestPathLayout(const ExtendedGraph& x, const SegmentStructure& seg
 // (Kahn's order, no recursion). O(V + E).
 std::vector<double> longestPaths(int count, const std::vector<std::pair<std::pair<int, int>, double>>& arcs);
 
-struct DualCheck {
-    bool ok = true;
-    std::string problem;
-};
-
 // Checker: the rectangles of rooms and spares tile [0,W]×[0,D] without
 // overlap, and two of them share a wall of positive length exactly when the
 // extended graph joins them (a vertex touches the outline side X exactly when
 // it is adjacent to pole X). O(n log n + contacts) for tilings.
-DualCheck checkRectangularDual(const ExtendedGraph& x, const std::vector<Rect>& rects, double width,
+StageCheck checkRectangularDual(const ExtendedGraph& x, const std::vector<Rect>& rects, double width,
                                double depth, double tolerance = 1e-7);
 
 } // namespace abut

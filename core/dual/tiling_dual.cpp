@@ -216,12 +216,12 @@ TilingDual dualOfTiling(const std::vector<Rect>& tiles, int roomCount, double wi
             rel.at[v].push_back(l);
         }
     }
-    const GraphCheck gc = checkExtendedGraph(x);
+    const StageCheck gc = checkExtendedGraph(x);
     if (!gc.ok) {
         out.problem = "the tiling's graph is not an extended graph: " + gc.problem;
         return out;
     }
-    const LabelingCheck lc = checkRegularEdgeLabeling(x, rel);
+    const StageCheck lc = checkRegularEdgeLabeling(x, rel);
     if (!lc.ok) {
         out.problem = "the tiling's labeling is not regular: " + lc.problem;
         return out;

@@ -149,7 +149,7 @@ ExtendedGraphLoad parseExtendedGraph(const std::string& text, const std::string&
         if (to[v] < rooms) roomNames[to[v]] = names[v];
     x.names = roomNames;
     for (int s = 0; s < 4; ++s) x.names.push_back(names[pole[s]]);
-    const GraphCheck check = checkExtendedGraph(x);
+    const StageCheck check = checkExtendedGraph(x);
     if (!check.ok) return fail("", "not an irreducible triangulation of the 4-cycle N-E-S-W: " + check.problem);
     out.ok = true;
     out.graph = std::move(x);

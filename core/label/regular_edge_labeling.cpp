@@ -212,10 +212,10 @@ LabelingResult computeRegularEdgeLabeling(const ExtendedGraph& x) {
     return Labeller(x).run(order);
 }
 
-LabelingCheck checkRegularEdgeLabeling(const ExtendedGraph& x, const RegularEdgeLabeling& rel) {
+StageCheck checkRegularEdgeLabeling(const ExtendedGraph& x, const RegularEdgeLabeling& rel) {
     const PlaneGraph& g = x.graph;
     auto fail = [&](int v, const std::string& why) {
-        return LabelingCheck{false, x.names[v] + ": " + why};
+        return StageCheck{false, x.names[v] + ": " + why};
     };
     if (static_cast<int>(rel.at.size()) != g.vertexCount()) return {false, "size mismatch"};
     for (int v = 0; v < g.vertexCount(); ++v) {

@@ -21,6 +21,7 @@
 // for bounded degree.
 #pragma once
 
+#include "check.h"
 #include "augment/extended_graph.h"
 
 #include <cstdint>
@@ -48,13 +49,8 @@ struct LabelingResult {
 
 LabelingResult computeRegularEdgeLabeling(const ExtendedGraph& x);
 
-struct LabelingCheck {
-    bool ok = true;
-    std::string problem;
-};
-
 // O(m) checker of the local rules at every inner vertex and at the poles, and
 // of the agreement of both ends of every edge.
-LabelingCheck checkRegularEdgeLabeling(const ExtendedGraph& x, const RegularEdgeLabeling& rel);
+StageCheck checkRegularEdgeLabeling(const ExtendedGraph& x, const RegularEdgeLabeling& rel);
 
 } // namespace abut

@@ -67,8 +67,8 @@ bool graphFirstVariants(const Brief& brief, const AugmentResult& aug, const Plan
         }
         const ExtendedGraph& x = graphs[g];
         const LabelingResult r = computeRegularEdgeLabeling(x);
-        const LabelingCheck c = r.status == LabelingStatus::Ok ? checkRegularEdgeLabeling(x, r.labeling)
-                                                               : LabelingCheck{false, r.message};
+        const StageCheck c = r.status == LabelingStatus::Ok ? checkRegularEdgeLabeling(x, r.labeling)
+                                                               : StageCheck{false, r.message};
         if (!c.ok) {
             plan.status = PlanStatus::Internal;
             plan.summary = "Internal error: no regular edge labeling (" + c.problem + "). Please report this brief.";
@@ -79,10 +79,10 @@ bool graphFirstVariants(const Brief& brief, const AugmentResult& aug, const Plan
             const RegularEdgeLabeling* rel = labelings.next();
             if (!rel) break;
             PlanVariant v = layoutVariant(brief, x, *rel, options);
-            const std::string problem = checkVariant(brief, plan.footprint, v);
-            if (!problem.empty()) {
+            const StageCheck check = checkVariant(brief, plan.footprint, v);
+            if (!check.ok) {
                 plan.status = PlanStatus::Internal;
-                plan.summary = "Internal error: the plan failed its check (" + problem + "). Please report this brief.";
+                plan.summary = "Internal error: the plan failed its check (" + check.problem + "). Please report this brief.";
                 return false;
             }
             v.oneSided = isOneSided(x, *rel);
@@ -104,7 +104,7 @@ bool graphFirstVariants(const Brief& brief, const AugmentResult& aug, const Plan
         PlanVariant& v = variants[i];
         const SizingProblem problem(brief, v.extended, v.labeling, plan.footprint, sizing);
         PlanVariant candidate = applySizing(brief, plan.footprint, v, problem.solve());
-        if (!checkVariant(brief, plan.footprint, candidate).empty()) continue; // keep the fitted one
+        if (!checkVariant(brief, plan.footprint, candidate).ok) continue; // keep the fitted one
         v = std::move(candidate);
     }
     // A sized variant has its unmet requirements worked out; a merely fitted
@@ -264,7 +264,7 @@ bool graphFirstVariants(const Brief& brief, const AugmentResult& aug, const Plan
         relabelled.labeling = rel;
         PlanVariant candidate = applySizing(brief, plan.footprint, relabelled, best);
         candidate.oneSided = isOneSided(v.extended, rel);
-        if (checkVariant(brief, plan.footprint, candidate).empty() && candidate.score <= v.score) {
+        if (checkVariant(brief, plan.footprint, candidate).ok && candidate.score <= v.score) {
             v = std::move(candidate);
             if (monitor && monitor->found) monitor->found(v);
         }

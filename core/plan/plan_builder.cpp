@@ -199,31 +199,31 @@ PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const Regu
     return out;
 }
 
-std::string checkVariant(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
+StageCheck checkVariant(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
     const double tol = 1e-6 * std::max(fp.width, fp.depth);
     std::vector<Rect> all = v.rooms;
     all.insert(all.end(), v.spaces.begin(), v.spaces.end());
     double area = 0;
     for (std::size_t i = 0; i < all.size(); ++i) {
         const Rect& r = all[i];
-        if (!(r.width() > 0 && r.depth() > 0)) return "a rectangle has no area";
+        if (!(r.width() > 0 && r.depth() > 0)) return StageCheck::failed("a rectangle has no area");
         if (r.x0 < -tol || r.y0 < -tol || r.x1 > fp.width + tol || r.y1 > fp.depth + tol)
-            return "a rectangle leaves the footprint";
+            return StageCheck::failed("a rectangle leaves the footprint");
         area += r.area();
         for (std::size_t j = i + 1; j < all.size(); ++j) {
             const Rect& s = all[j];
             if (std::min(r.x1, s.x1) - std::max(r.x0, s.x0) > tol &&
                 std::min(r.y1, s.y1) - std::max(r.y0, s.y0) > tol)
-                return "two rectangles overlap";
+                return StageCheck::failed("two rectangles overlap");
         }
     }
-    if (std::abs(area - fp.width * fp.depth) > 1e-6 * fp.width * fp.depth) return "the footprint is not filled";
+    if (std::abs(area - fp.width * fp.depth) > 1e-6 * fp.width * fp.depth) return StageCheck::failed("the footprint is not filled");
     for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
         if (std::count(v.dropped.begin(), v.dropped.end(), static_cast<int>(a))) continue;
         const Adjacency& adj = brief.adjacencies[a];
         const double wall = sharedWall(v.rooms[brief.roomIndex(adj.a)], v.rooms[brief.roomIndex(adj.b)], tol);
         const double need = adj.kind == AdjacencyKind::Door ? brief.doorWidth - tol : tol;
-        if (wall < need) return "adjacency " + adj.a + "–" + adj.b + " is not realised";
+        if (wall < need) return StageCheck::failed("adjacency " + adj.a + "–" + adj.b + " is not realised");
     }
     return {};
 }
@@ -382,10 +382,10 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
         plan.stats.moves = found.moves;
         for (const SearchPlan& sp : found.plans) {
             PlanVariant v = variantOf(brief, plan.footprint, sp);
-            const std::string problem = checkVariant(brief, plan.footprint, v);
-            if (!problem.empty()) {
+            const StageCheck check = checkVariant(brief, plan.footprint, v);
+            if (!check.ok) {
                 plan.status = PlanStatus::Internal;
-                plan.summary = "Internal error: a searched plan failed its check (" + problem + "). Please report this brief.";
+                plan.summary = "Internal error: a searched plan failed its check (" + check.problem + "). Please report this brief.";
                 return plan;
             }
             plan.variants.push_back(std::move(v));

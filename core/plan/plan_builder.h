@@ -73,7 +73,7 @@ std::vector<Rect> vertexRects(const PlanVariant& v);
 
 // Independent-of-construction check of a variant against its brief: the
 // rectangles tile the footprint, every adjacency not listed as dropped is a
-// shared wall (doors at least doorWidth). Returns "" when valid.
-std::string checkVariant(const Brief& brief, const Footprint& footprint, const PlanVariant& v);
+// shared wall (doors at least doorWidth).
+StageCheck checkVariant(const Brief& brief, const Footprint& footprint, const PlanVariant& v);
 
 } // namespace abut

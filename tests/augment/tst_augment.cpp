@@ -279,7 +279,7 @@ void TestAugment::randomPlanarBriefs() {
         const Brief b = abut::testing::randomBrief(o, rng);
         const AugmentResult r = buildExtendedGraph(b);
         QVERIFY2(r.status != AugmentStatus::Internal, r.summary.c_str());
-        const GraphCheck c = checkExtendedGraph(r.extended, b, r.dropped);
+        const StageCheck c = checkExtendedGraph(r.extended, b, r.dropped);
         QVERIFY2(c.ok, (std::to_string(i) + ": " + c.problem).c_str());
         compromised += r.status == AugmentStatus::Compromised;
         withSpares += r.extended.spareCount() > 0;
@@ -299,7 +299,7 @@ void TestAugment::everyCornerAssignmentBuilds() {
         const std::size_t count = std::min<std::size_t>(r.frame.corners.size(), 60);
         for (std::size_t c = 0; c < count; ++c) {
             const ExtendedGraph x = extendFrame(r.frame, ids, r.frame.corners[c]);
-            const GraphCheck check = checkExtendedGraph(x);
+            const StageCheck check = checkExtendedGraph(x);
             QVERIFY2(check.ok, check.problem.c_str());
         }
     }

@@ -21,11 +21,11 @@ namespace {
 std::string fullCheck(const ExtendedGraph& x, const DualWeights& w = {}) {
     const LabelingResult r = computeRegularEdgeLabeling(x);
     if (r.status != LabelingStatus::Ok) return "labeling: " + r.message;
-    const LabelingCheck c = checkRegularEdgeLabeling(x, r.labeling);
+    const StageCheck c = checkRegularEdgeLabeling(x, r.labeling);
     if (!c.ok) return "labeling check: " + c.problem;
     const SegmentStructure s = maximalSegments(x, r.labeling);
     const DualLayout l = longestPathLayout(x, s, w);
-    const DualCheck d = checkRectangularDual(x, l.rects, l.width, l.depth);
+    const StageCheck d = checkRectangularDual(x, l.rects, l.width, l.depth);
     if (!d.ok) return "dual check: " + d.problem;
     return {};
 }
@@ -51,7 +51,7 @@ void TestLabelingDual::randomTilings() {
         const int n = 1 + static_cast<int>(rng() % 120);
         const auto rects = abut::testing::randomSlicing(n, 12.0, 9.0, rng);
         const ExtendedGraph x = abut::testing::extendedGraphOfTiling(rects, 12.0, 9.0);
-        const GraphCheck g = checkExtendedGraph(x);
+        const StageCheck g = checkExtendedGraph(x);
         QVERIFY2(g.ok, g.problem.c_str());
         const std::string problem = fullCheck(x);
         QVERIFY2(problem.empty(), (std::to_string(i) + ": " + problem).c_str());
@@ -83,7 +83,7 @@ void TestLabelingDual::pinwheelPlan() {
     QCOMPARE(plan.status, PlanStatus::Ok);
     QVERIFY(!plan.variants.empty());
     const PlanVariant& v = plan.variants.front();
-    QCOMPARE(checkVariant(b, *b.footprint, v), std::string());
+    QCOMPARE(checkVariant(b, *b.footprint, v).problem, std::string());
     QVERIFY(v.dropped.empty());
     QVERIFY(v.spaces.empty());
     // The centre room touches no outline side.
@@ -189,7 +189,7 @@ void TestLabelingDual::samplesGiveValidPlans() {
     QVERIFY2(plan.status != PlanStatus::Internal, plan.summary.c_str());
     QVERIFY(!plan.variants.empty());
     for (const PlanVariant& v : plan.variants)
-        QCOMPARE(checkVariant(l.brief, plan.footprint, v), std::string());
+        QCOMPARE(checkVariant(l.brief, plan.footprint, v).problem, std::string());
 }
 
 QTEST_GUILESS_MAIN(TestLabelingDual)

@@ -230,7 +230,7 @@ private slots:
             }
         }
         QVERIFY(changed >= 2);
-        QVERIFY(checkVariant(b, b.effectiveFootprint(), after).empty());
+        QVERIFY(checkVariant(b, b.effectiveFootprint(), after).ok);
         // The schedule shows the new areas.
         QTableWidget* schedule = w.schedulePanel()->table();
         QCOMPARE(schedule->item(0, 2)->text(), QString::number(after.rooms[0].area(), 'f', 1));
@@ -252,7 +252,7 @@ private slots:
         // Re-sized on the spot, before any new plan computation finishes.
         QVERIFY(w.planning());
         QVERIFY(w.currentVariant().rooms[room].area() > was + 1e-6);
-        QVERIFY(checkVariant(w.brief(), w.brief().effectiveFootprint(), w.currentVariant()).empty());
+        QVERIFY(checkVariant(w.brief(), w.brief().effectiveFootprint(), w.currentVariant()).ok);
     }
 
     // Alt+drag up on a room raises its target; the plan follows while the

@@ -179,7 +179,7 @@ void TestLabelingLattice::listedLabelingsValidAndDistinct() {
         LabelingEnumerator e(x, r.labeling);
         std::set<std::vector<std::vector<EdgeLabel>>> seen;
         while (const RegularEdgeLabeling* l = e.next()) {
-            const LabelingCheck c = checkRegularEdgeLabeling(x, *l);
+            const StageCheck c = checkRegularEdgeLabeling(x, *l);
             QVERIFY2(c.ok, c.problem.c_str());
             QVERIFY(seen.insert(l->at).second);
             if (seen.size() > 5000) break;

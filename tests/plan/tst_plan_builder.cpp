@@ -85,7 +85,7 @@ private slots:
         const Plan plan = buildPlan(b, {}, &m);
         QCOMPARE(plan.status, PlanStatus::Cancelled);
         QCOMPARE(calls, stopAfter + 1); // nothing more is asked once stopped
-        for (const PlanVariant& v : plan.variants) QVERIFY(checkVariant(b, plan.footprint, v).empty());
+        for (const PlanVariant& v : plan.variants) QVERIFY(checkVariant(b, plan.footprint, v).ok);
         if (stopAfter == 0) QVERIFY(plan.variants.empty());
     }
 
@@ -120,7 +120,7 @@ private slots:
                     if (!beside) QCOMPARE(r.rooms[i].area, state.rooms[i].area);
                 }
                 const PlanVariant dragged = applySizing(b, plan.footprint, v, r);
-                QVERIFY2(checkVariant(b, plan.footprint, dragged).empty(), checkVariant(b, plan.footprint, dragged).c_str());
+                QVERIFY2(checkVariant(b, plan.footprint, dragged).ok, checkVariant(b, plan.footprint, dragged).problem.c_str());
             }
             ++moved;
         }

@@ -147,9 +147,9 @@ private slots:
             }
             ++withPlan;
             for (const PlanVariant& v : plan.variants) {
-                const std::string bad = checkVariant(b, plan.footprint, v);
-                QVERIFY2(bad.empty(), (where + ": " + bad.c_str()).constData());
-                const LabelingCheck labeling = checkRegularEdgeLabeling(v.extended, v.labeling);
+                const StageCheck bad = checkVariant(b, plan.footprint, v);
+                QVERIFY2(bad.ok, (where + ": " + bad.problem.c_str()).constData());
+                const StageCheck labeling = checkRegularEdgeLabeling(v.extended, v.labeling);
                 QVERIFY2(labeling.ok, (where + ": labeling: " + labeling.problem.c_str()).constData());
                 ++variantsChecked;
             }
