@@ -39,6 +39,11 @@ struct Diagnostic {
     std::vector<int> adjacencies; // indices into Brief::adjacencies
 };
 
+// Notes kept for the record that ask nothing of the planner (an added
+// contact is an extra wall the brief did not ask for): the CLI's text and
+// the editor leave them out.
+inline bool costsTheBriefNothing(const Diagnostic& d) { return d.code == DiagnosticCode::AddedContact; }
+
 const char* toString(Severity s);
 const char* toString(DiagnosticCode c);
 

@@ -65,10 +65,8 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
         return exitInternal;
     }
     // Targets over the footprint, or rooms wider than it: reported first, and no plan can meet them.
-    std::vector<Diagnostic> diagnostics = footprintProblems(brief);
-    const bool fits = std::none_of(diagnostics.begin(), diagnostics.end(),
-                                   [](const Diagnostic& d) { return d.severity == Severity::Error; });
-    diagnostics.insert(diagnostics.end(), plan.diagnostics.begin(), plan.diagnostics.end());
+    const std::vector<Diagnostic>& diagnostics = checked.diagnostics;
+    const bool fits = checked.fits;
     // No rooms, no plan: `plan` says so too.
     const int code =
         plan.status == AugmentStatus::Compromised || plan.status == AugmentStatus::Empty || !fits ? exitNoPlan : exitOk;
@@ -137,11 +135,11 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
     }
     out << "\n" << summary << "\n";
     for (const Diagnostic& d : diagnostics) {
-        if (d.severity == Severity::Info && d.code == DiagnosticCode::AddedContact) continue;
+        if (costsTheBriefNothing(d)) continue;
         out << "  " << toString(d.severity) << ": " << d.message << "\n";
     }
     int added = 0;
-    for (const Diagnostic& d : plan.diagnostics) added += d.code == DiagnosticCode::AddedContact;
+    for (const Diagnostic& d : diagnostics) added += costsTheBriefNothing(d);
     if (added > 0)
         out << "  info: " << added << " wall(s) the brief did not ask for are added to close the plan"
             << " (use --json for the list).\n";

@@ -58,22 +58,19 @@ LiveCheck runLiveCheck(const Brief& brief, quint64 revision) {
         }
     }
 
-    for (const Diagnostic& d : footprintProblems(brief)) {
+    // A short search on one thread: the editor plans on the other cores.
+    BriefCheckOptions o;
+    o.searchSeconds = 1.5;
+    const BriefCheck checked = checkBrief(brief, o);
+    for (const Diagnostic& d : checked.diagnostics) {
+        if (costsTheBriefNothing(d)) continue;
         out.diagnostics.push_back(d);
+        if (d.severity == Severity::Info) continue;
         out.marks.rooms.insert(d.rooms.begin(), d.rooms.end());
+        out.marks.adjacencies.insert(d.adjacencies.begin(), d.adjacencies.end());
     }
     if (!brief.rooms.empty()) {
-        // A short search on one thread: the editor plans on the other cores.
-        BriefCheckOptions o;
-        o.searchSeconds = 1.5;
-        const AugmentResult aug = checkBrief(brief, o).arrangement;
-        for (const Diagnostic& d : aug.diagnostics) {
-            if (d.code == DiagnosticCode::AddedContact) continue; // extra walls cost the brief nothing
-            out.diagnostics.push_back(d);
-            if (d.severity == Severity::Info) continue;
-            out.marks.rooms.insert(d.rooms.begin(), d.rooms.end());
-            out.marks.adjacencies.insert(d.adjacencies.begin(), d.adjacencies.end());
-        }
+        const AugmentResult& aug = checked.arrangement;
         if (aug.status == AugmentStatus::Feasible && out.diagnostics.empty()) {
             Diagnostic ok;
             ok.code = DiagnosticCode::Feasible;

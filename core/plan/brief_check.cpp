@@ -30,7 +30,8 @@ private:
 
 } // namespace
 
-BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options) {
+namespace {
+BriefCheck arrangementCheck(const Brief& brief, const BriefCheckOptions& options) {
     BriefCheck out;
     out.arrangement = buildExtendedGraph(brief);
     AugmentResult& aug = out.arrangement;
@@ -75,6 +76,18 @@ BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options) {
                       ? "A rectangular plan exists with every adjacency and facade wish."
                       : "A rectangular plan exists with every 'must' adjacency and facade wish; " +
                             std::to_string(aug.dropped.size()) + " 'should' adjacency(ies) dropped.";
+    return out;
+}
+
+} // namespace
+
+BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options) {
+    BriefCheck out = arrangementCheck(brief, options);
+    out.diagnostics = footprintProblems(brief);
+    out.fits = std::none_of(out.diagnostics.begin(), out.diagnostics.end(),
+                            [](const Diagnostic& d) { return d.severity == Severity::Error; });
+    out.diagnostics.insert(out.diagnostics.end(), out.arrangement.diagnostics.begin(),
+                           out.arrangement.diagnostics.end());
     return out;
 }
 

@@ -14,6 +14,7 @@
 
 #include "augment/augment.h"
 #include "brief/brief.h"
+#include "brief/footprint_check.h"
 
 namespace abut {
 
@@ -26,6 +27,12 @@ struct BriefCheckOptions {
 };
 
 struct BriefCheck {
+    // Everything the check found, in the order to show it: the footprint's
+    // problems (targets over it, rooms wider than it, a facade too short),
+    // then the arrangement's notes. Added contacts (costsTheBriefNothing)
+    // are among them; the CLI's text and the editor leave them out.
+    std::vector<Diagnostic> diagnostics;
+    bool fits = true;          // no footprint error: the numbers can be met at all
     AugmentResult arrangement; // the augmentation's, or the searched plan's when it keeps more
     bool searched = false;     // a plan search ran
     bool foundBySearch = false; // it found a plan keeping every 'must' and facade wish
