@@ -429,11 +429,21 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
         plan.variants.front().relaxations = relaxationsFor(
             given, plan.footprint, v, 12, options.timeLimit > 0 ? std::clamp(0.1 * options.timeLimit, 0.2, 2.0) : 1.0);
     plan.status = stopped ? PlanStatus::Cancelled : mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
+    // The summary speaks of the best variant, not of the augmentation's graph:
+    // it keeps everything, every 'must' (some 'should' not realised), or the
+    // augmentation says why it cannot.
+    int shouldsDropped = 0, givenUp = static_cast<int>(v.unmetFacade.size());
+    for (int d : v.dropped) (brief.adjacencies[d].priority == Priority::Should ? shouldsDropped : givenUp) += 1;
     plan.summary = stopped ? "Stopped: " + std::to_string(plan.variants.size()) + " variant(s) found so far."
-                   : aug.status == AugmentStatus::Compromised && !mustLost
-                       // the search found what the augmentation could not
-                       ? std::string("A rectangular plan exists with every 'must' adjacency and facade wish.")
-                       : aug.summary;
+                   : mustLost
+                       ? aug.status == AugmentStatus::Compromised
+                             ? aug.summary
+                             : "No variant found keeps every 'must' adjacency and facade wish: the best gives up " +
+                                   std::to_string(givenUp) + "."
+                   : shouldsDropped == 0
+                       ? std::string("A rectangular plan exists with every adjacency and facade wish.")
+                       : "A rectangular plan exists with every 'must' adjacency and facade wish; " +
+                             std::to_string(shouldsDropped) + " 'should' adjacency(ies) not realised in the best variant.";
     plan.stats.seconds = elapsed();
     if (!stopped) keepGoing(1.0, "done");
     return plan;

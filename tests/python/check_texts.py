@@ -6,6 +6,8 @@
 - `plan` lists what the best variant does not meet, and the plan file's
   `unmet` says the same as the judge in plan_quality.py (shapely) for the
   'must' adjacencies and the facades;
+- the summary of `plan` speaks of the best variant (a 'should' left out is
+  not "every adjacency");
 - the PDF sheet of a plan that drops a 'must' lists it under "Not met"
   (read back with poppler's pdftotext);
 - what must give: briefs with an exact answer (the clinic, read off a drawn
@@ -84,6 +86,18 @@ with tempfile.TemporaryDirectory() as tmp:
     for u in listed:
         words = u["text"].split(":")[0]  # "Archive and Meeting room"
         expect(words in " ".join(text.split()), f"the sheet names {words!r}")
+
+    # The summary speaks of the best variant: one that leaves a 'should'
+    # out does not claim every adjacency (the family house, 12 × 9 m).
+    house = os.path.join(samples, "family-house.abut.json")
+    out = os.path.join(tmp, "house.plan.json")
+    r = run("plan", house, "-o", out, "--time-limit", "20", "--threads", "1")
+    best = json.load(open(out))["variants"][0]
+    if best["dropped"]:
+        expect("every adjacency" not in r.stdout.splitlines()[0], f"house summary with {best['dropped']} dropped: {r.stdout.splitlines()[0]}")
+        expect("'should' adjacency(ies) not realised" in r.stdout, "house summary names the 'should' left out")
+    else:
+        expect("every adjacency and facade wish" in r.stdout, "house summary when nothing is dropped")
 
     # Surplus: 10 % more footprint than targets.
     rooms = [{"id": f"r{k}", "area": a} for k, a in enumerate([20, 15, 12, 12, 10, 10, 8, 8, 5])]
