@@ -1,5 +1,5 @@
 // SPDX-License-Identifier: MIT
-// From a brief to an extended graph: planarity witnesses, separating
+// From a brief to an extended graph: dropping for planarity, separating
 // triangles, facades, small and disconnected briefs, and the checker on
 // thousands of random briefs.
 #include "augment/augment.h"
@@ -9,9 +9,6 @@
 #include "embed/planar_embedding.h"
 #include "io/project_io.h"
 #include "../support/random_briefs.h"
-
-#include <boost/graph/adjacency_list.hpp>
-#include <boost/graph/is_kuratowski_subgraph.hpp>
 
 #include <QtTest>
 
@@ -27,13 +24,6 @@ std::vector<std::pair<int, int>> completeGraph(int n) {
     return e;
 }
 
-std::vector<std::pair<int, int>> completeBipartite33() {
-    std::vector<std::pair<int, int>> e;
-    for (int i = 0; i < 3; ++i)
-        for (int j = 3; j < 6; ++j) e.emplace_back(i, j);
-    return e;
-}
-
 bool hasCode(const AugmentResult& r, DiagnosticCode code) {
     return std::any_of(r.diagnostics.begin(), r.diagnostics.end(),
                        [&](const Diagnostic& d) { return d.code == code; });
@@ -44,8 +34,6 @@ bool hasCode(const AugmentResult& r, DiagnosticCode code) {
 class TestAugment : public QObject {
     Q_OBJECT
 private slots:
-    void kuratowskiWitness_data();
-    void kuratowskiWitness();
     void nonPlanarBriefDropsTheCheapest();
     void separatingTriangleFourRooms();
     void fourWayStudioSample();
@@ -63,33 +51,7 @@ private slots:
     void randomPlanarBriefs();
     void everyCornerAssignmentBuilds();
     void stuckFaceGetsSpares();
-    void maximalPlanarEdgeCount();
 };
-
-void TestAugment::kuratowskiWitness_data() {
-    QTest::addColumn<int>("n");
-    QTest::addColumn<QString>("kind");
-    QTest::newRow("K5") << 5 << "K5";
-    QTest::newRow("K3,3") << 6 << "K33";
-    QTest::newRow("K6") << 6 << "K6";
-}
-
-void TestAugment::kuratowskiWitness() {
-    QFETCH(int, n);
-    QFETCH(QString, kind);
-    const auto edges = kind == "K33" ? completeBipartite33() : completeGraph(n);
-    const EmbeddingResult e = embedPlanar(n, edges);
-    QCOMPARE(e.status, EmbeddingStatus::NonPlanar);
-    QVERIFY(!e.witnessEdges.empty());
-    // Boost's own checker must accept the witness as a Kuratowski subgraph.
-    using G = boost::adjacency_list<boost::vecS, boost::vecS, boost::undirectedS,
-                                    boost::property<boost::vertex_index_t, int>,
-                                    boost::property<boost::edge_index_t, int>>;
-    G g(n);
-    std::vector<boost::graph_traits<G>::edge_descriptor> witness;
-    for (int i : e.witnessEdges) witness.push_back(boost::add_edge(edges[i].first, edges[i].second, g).first);
-    QVERIFY(boost::is_kuratowski_subgraph(g, witness.begin(), witness.end()));
-}
 
 void TestAugment::nonPlanarBriefDropsTheCheapest() {
     // K5 where one adjacency is a 'should' wall: that one is dropped.
@@ -332,18 +294,6 @@ void TestAugment::stuckFaceGetsSpares() {
     // A triangulated sphere: every triangle is a face (pass no outer face).
     QVERIFY(separatingTriangles(g, {}).empty());
     QCOMPARE(g.edgeCount(), 3 * g.vertexCount() - 6);
-}
-
-void TestAugment::maximalPlanarEdgeCount() {
-    // A maximal planar graph has 3n − 6 edges and 2n − 4 faces (Euler's
-    // formula for plane graphs, V − E + F = 2 with every face a triangle).
-    // Checked on a stacked triangulation and its embedding.
-    std::mt19937 rng(3);
-    const auto edges = abut::testing::randomPlanarEdges(30, 1.0, rng);
-    QCOMPARE(static_cast<int>(edges.size()), 3 * 30 - 6);
-    const EmbeddingResult e = embedPlanar(30, edges);
-    QCOMPARE(e.status, EmbeddingStatus::Planar);
-    QCOMPARE(static_cast<int>(e.graph.faces().size()), 2 * 30 - 4);
 }
 
 QTEST_GUILESS_MAIN(TestAugment)

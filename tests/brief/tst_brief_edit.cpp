@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: MIT
-// Editing a brief, importing CSV, tidying the sketch (core side of the editor).
+// Editing a brief, importing CSV, placing unsketched rooms (core side of the
+// editor; the tidy-up drawing is tested with the embed stage, tests/embed).
 #include "brief/brief_edit.h"
 #include "embed/straight_line_drawing.h"
 #include "io/csv_import.h"
@@ -24,29 +25,6 @@ Brief threeRooms() {
     }
     addAdjacency(b, {"hall", "kitchen", AdjacencyKind::Door, Priority::Must});
     return b;
-}
-
-// Crossings checked with Qt's segment intersection, independent of core's
-// own crossing test: proper crossings, and a room lying on another's line.
-int crossingsByQt(const Brief& b, const std::vector<SketchPoint>& p, const std::vector<int>& skip) {
-    std::vector<QLineF> lines;
-    std::vector<std::pair<int, int>> ends;
-    for (std::size_t i = 0; i < b.adjacencies.size(); ++i) {
-        if (std::count(skip.begin(), skip.end(), int(i))) continue;
-        const int u = b.roomIndex(b.adjacencies[i].a), v = b.roomIndex(b.adjacencies[i].b);
-        lines.emplace_back(QPointF(p[u].x, p[u].y), QPointF(p[v].x, p[v].y));
-        ends.emplace_back(u, v);
-    }
-    int crossings = 0;
-    for (std::size_t i = 0; i < lines.size(); ++i)
-        for (std::size_t j = i + 1; j < lines.size(); ++j) {
-            const auto [a, b2] = ends[i];
-            const auto [c, d] = ends[j];
-            if (a == c || a == d || b2 == c || b2 == d) continue;
-            QPointF at;
-            if (lines[i].intersects(lines[j], &at) == QLineF::BoundedIntersection) ++crossings;
-        }
-    return crossings;
 }
 
 } // namespace
@@ -227,54 +205,6 @@ private slots:
         QVERIFY(!r.errors.empty());
         const QString got = QString::fromStdString(r.errors[0].toString());
         QVERIFY2(got.contains(expected), qPrintable(got));
-    }
-
-    void tidyDrawsSamplesWithoutCrossings_data() {
-        QTest::addColumn<QString>("sample");
-        for (const char* s : {"family-house", "clinic", "office-floor"}) QTest::newRow(s) << s;
-    }
-    void tidyDrawsSamplesWithoutCrossings() {
-        QFETCH(QString, sample);
-        const LoadResult l = loadProject((ABUT_SAMPLES "/" + sample + ".abut.json").toStdString());
-        QVERIFY(l.ok());
-        const TidyResult t = tidySketch(l.brief);
-        QCOMPARE(t.status, TidyStatus::Drawn);
-        QCOMPARE(t.positions.size(), l.brief.rooms.size());
-        QCOMPARE(crossingsByQt(l.brief, t.positions, {}), 0);
-    }
-
-    // Random planar briefs (stacked triangulations, thinned, some
-    // disconnected): never a crossing, never two rooms on one spot.
-    void tidyRandomPlanar() {
-        std::mt19937 rng(8);
-        for (int k = 0; k < 200; ++k) {
-            testing::RandomBriefOptions o;
-            o.rooms = 3 + k % 60;
-            const Brief b = testing::randomBrief(o, rng);
-            const TidyResult t = tidySketch(b);
-            QCOMPARE(t.status, TidyStatus::Drawn);
-            QCOMPARE(crossingsByQt(b, t.positions, {}), 0);
-            std::set<std::pair<double, double>> spots;
-            for (const SketchPoint& p : t.positions) spots.emplace(p.x, p.y);
-            QCOMPARE(spots.size(), t.positions.size());
-        }
-    }
-
-    void tidyNonPlanarLeavesOut() {
-        // K5: ten adjacencies, one must go (Kuratowski).
-        Brief b;
-        for (int i = 0; i < 5; ++i) {
-            Room r;
-            r.id = "r" + std::to_string(i);
-            r.area = 10;
-            addRoom(b, r);
-        }
-        for (int i = 0; i < 5; ++i)
-            for (int j = i + 1; j < 5; ++j) addAdjacency(b, {b.rooms[i].id, b.rooms[j].id});
-        const TidyResult t = tidySketch(b);
-        QCOMPARE(t.status, TidyStatus::DrawnWithout);
-        QCOMPARE(t.leftOut.size(), std::size_t(1));
-        QCOMPARE(crossingsByQt(b, t.positions, t.leftOut), 0);
     }
 
     void placeUnsketched() {

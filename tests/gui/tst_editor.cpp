@@ -6,6 +6,7 @@
 #include "brief_panel.h"
 #include "document.h"
 #include "io/project_io.h"
+#include "gui_fixture.h"
 #include "main_window.h"
 #include "recovery.h"
 #include "sketch_view.h"
@@ -19,6 +20,7 @@
 
 using namespace abut;
 using namespace abut::gui;
+using namespace abut::gui::testing;
 
 namespace {
 
@@ -56,13 +58,8 @@ class TestEditor : public QObject {
     Q_OBJECT
 
     QTemporaryDir recoveryDir;
-    MainWindowOptions options() const {
-        MainWindowOptions o;
-        o.recoveryFolder = recoveryDir.path();
-        o.autosaveSeconds = 0;
-        o.planDelayMs = 60000; // plans are issue-9 territory; keep the tests on the sketch
-        return o;
-    }
+    // Plans are tested in tst_plans; these tests stay on the sketch and the brief.
+    MainWindowOptions options() const { return testOptions(recoveryDir.path(), 60000); }
 
 private slots:
     void initTestCase() {
@@ -114,7 +111,7 @@ private slots:
             QCOMPARE(text(w.brief()), states[k]);
         }
         QVERIFY(w.isWindowModified());
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+        dropChangesSilently(w);
     }
 
     // A double-click puts the room where it was clicked and leaves the view
@@ -141,7 +138,7 @@ private slots:
         // A 12 m² room is a modest bubble at the default zoom: under a fifth of
         // the view wide (its disc is 2 × 10·√(12/π) ≈ 39 sketch units across).
         QVERIFY(2 * 10 * std::sqrt(12 / M_PI) * view->transform().m11() < vp->width() / 5.0);
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+        dropChangesSilently(w);
     }
 
     // Typing right after the double-click names the room; the room and its
@@ -184,7 +181,7 @@ private slots:
         QCOMPARE(w.brief().rooms.size(), std::size_t(1));
         QCOMPARE(w.brief().rooms[0].name, std::string("Room 1"));
         QVERIFY(!w.sketchView()->editingName());
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+        dropChangesSilently(w);
     }
 
     void dragMovesRoomsInOneStep() {
@@ -229,7 +226,7 @@ private slots:
         w.document()->undoStack()->undo();
         QCOMPARE(w.brief().rooms.size(), std::size_t(5));
         QCOMPARE(w.brief().adjacencies.size(), std::size_t(10));
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+        dropChangesSilently(w);
     }
 
     void tableRefusesBadValuesInPlace() {
@@ -265,7 +262,7 @@ private slots:
         // Table and sketch selection follow each other.
         t->selectRow(2);
         QCOMPARE(w.sketchView()->selectedRooms(), QStringList{QString::fromStdString(w.brief().rooms[2].id)});
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+        dropChangesSilently(w);
     }
 
     void saveOpenRoundTrip() {
@@ -325,7 +322,7 @@ private slots:
         QVERIFY(!w.importCsv(ABUT_TEST_DATA "/csv/invalid/unknown-mark.csv", &errors));
         QVERIFY(!errors.isEmpty() && errors[0].contains(QStringLiteral("unknown-mark.csv:2")));
         QCOMPARE(w.document()->undoStack()->count(), 2); // nothing imported
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+        dropChangesSilently(w);
     }
 
     void nonPlanarSketchHighlightsWitness() {
@@ -370,7 +367,7 @@ private slots:
         w.tidyUp();
         QTRY_VERIFY_WITH_TIMEOUT(!w.checking() && w.lastCheck().revision == w.document()->revision(), 10000);
         QVERIFY(w.sketchView()->marks().crossings.empty());
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+        dropChangesSilently(w);
     }
 
     void recoveryWrittenAndOffered() {
@@ -395,7 +392,7 @@ private slots:
             MainWindow other(o);
             QVERIFY(other.recovery()->orphans().isEmpty());
             w.recovery()->abandonForTests(); // what a crash leaves behind
-            w.ask = [](auto&&...) { return QMessageBox::Discard; };
+            dropChangesSilently(w);
         }
         QVERIFY(QFileInfo::exists(recoveryFile));
         MainWindow w(o);
@@ -411,7 +408,7 @@ private slots:
         QVERIFY(w.document()->path().endsWith(QStringLiteral("family-house.abut.json")));
         QVERIFY(!QFileInfo::exists(recoveryFile));
         QVERIFY(w.recovery()->orphans().isEmpty());
-        w.ask = [](auto&&...) { return QMessageBox::Discard; };
+        dropChangesSilently(w);
     }
 };
 

@@ -6,6 +6,7 @@
 #include "brief_panel.h"
 #include "document.h"
 #include "io/project_io.h"
+#include "gui_fixture.h"
 #include "main_window.h"
 #include "plan/plan_builder.h"
 #include "plan/variant_key.h"
@@ -27,38 +28,13 @@
 using namespace abut;
 using namespace abut::gui;
 
-namespace {
-
-void waitForPlans(MainWindow& w, int ms = 60000) {
-    QTRY_VERIFY_WITH_TIMEOUT(!w.planning() && w.hasCurrentVariant(), ms);
-}
-
-// A window on screen (offscreen) with a sample open; unsaved changes are
-// dropped without asking when it closes.
-std::unique_ptr<MainWindow> windowOn(const MainWindowOptions& o, const char* sample) {
-    auto w = std::make_unique<MainWindow>(o);
-    w->ask = [](auto&&...) { return QMessageBox::Discard; };
-    w->resize(1400, 900);
-    w->show();
-    if (!QTest::qWaitForWindowExposed(w.get())) return nullptr;
-    if (!w->openProject(QStringLiteral(ABUT_SAMPLES "/") + QLatin1String(sample) + QStringLiteral(".abut.json")))
-        return nullptr;
-    return w;
-}
-
-} // namespace
+using namespace abut::gui::testing;
 
 class TestPlans : public QObject {
     Q_OBJECT
 
     QTemporaryDir recoveryDir;
-    MainWindowOptions options() const {
-        MainWindowOptions o;
-        o.recoveryFolder = recoveryDir.path();
-        o.autosaveSeconds = 0;
-        o.planDelayMs = 50;
-        return o;
-    }
+    MainWindowOptions options() const { return testOptions(recoveryDir.path(), 50); }
 
 private slots:
     void initTestCase() { QStandardPaths::setTestModeEnabled(true); }
@@ -322,7 +298,7 @@ private slots:
             for (const PlanView::Handle& k : w.planView()->handles())
                 if (k.vertical && k.segment == h.segment) onGrid = std::abs(k.position / g - std::round(k.position / g)) < 1e-6;
             QVERIFY(onGrid);
-            w.ask = [](auto&&...) { return QMessageBox::Discard; };
+            dropChangesSilently(w);
             return;
         }
         QSKIP("no wall with a grid line in its range");
