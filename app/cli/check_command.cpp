@@ -10,6 +10,7 @@
 #include <cmath>
 #include <iomanip>
 #include <sstream>
+#include <nlohmann/json.hpp>
 
 namespace abut::cli {
 

@@ -6,6 +6,7 @@
 #include "label/labeling_lattice.h"
 
 #include <iostream>
+#include <nlohmann/json.hpp>
 
 namespace abut::cli {
 

@@ -1,9 +1,21 @@
 // SPDX-License-Identifier: MIT
 #include "brief/brief.h"
 
+#include <nlohmann/json.hpp>
+
 #include <cmath>
 
 namespace abut {
+
+UnknownFields::UnknownFields(OrderedJson fields)
+    : fields_(fields.is_object() && !fields.empty() ? std::make_shared<const OrderedJson>(std::move(fields)) : nullptr) {}
+
+const OrderedJson& UnknownFields::json() const {
+    static const OrderedJson none = OrderedJson::object();
+    return fields_ ? *fields_ : none;
+}
+
+bool UnknownFields::empty() const { return !fields_ || fields_->empty(); }
 
 char sideLetter(Side s) { return "NESW"[static_cast<int>(s)]; }
 

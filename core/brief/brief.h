@@ -5,10 +5,11 @@
 // below; brief/footprint_check.h checks targets against the footprint.
 #pragma once
 
-#include <nlohmann/json.hpp>
+#include <nlohmann/json_fwd.hpp>
 
 #include <array>
 #include <cstdint>
+#include <memory>
 #include <optional>
 #include <string>
 #include <utility>
@@ -17,6 +18,22 @@
 namespace abut {
 
 using OrderedJson = nlohmann::ordered_json;
+
+// Fields of a project file that Abut does not know, kept as they were read
+// so that a save writes them back. Held behind a pointer (shared, never
+// changed once read) so that this header needs only the JSON library's
+// forward declarations; the reader and writer include the library.
+class UnknownFields {
+public:
+    UnknownFields() = default;
+    UnknownFields(OrderedJson fields); // NOLINT: implicit, as the reader assigns an object
+    // The fields as a JSON object (empty when there are none).
+    const OrderedJson& json() const;
+    bool empty() const;
+
+private:
+    std::shared_ptr<const OrderedJson> fields_;
+};
 
 // Facade sides, clockwise from north as seen on a plan with north up.
 enum class Side : std::uint8_t { N = 0, E = 1, S = 2, W = 3 };
@@ -68,7 +85,7 @@ struct Room {
     std::optional<double> areaTolerance; // fraction: the band around `area` that counts as on target
     std::string category;
     FacadeWish facade;
-    OrderedJson unknownFields = OrderedJson::object(); // kept for the round trip
+    UnknownFields unknownFields; // kept for the round trip
 
     const std::string& displayName() const { return name.empty() ? id : name; }
     // The band within which the room counts as on target (common practice at
@@ -80,7 +97,7 @@ struct Adjacency {
     std::string a, b; // room ids
     AdjacencyKind kind = AdjacencyKind::Door;
     Priority priority = Priority::Must;
-    OrderedJson unknownFields = OrderedJson::object();
+    UnknownFields unknownFields;
 };
 
 struct Footprint {
@@ -109,7 +126,7 @@ struct Brief {
     std::vector<std::pair<std::string, SketchPoint>> sketch; // in file order
     // The planner's choices among plan variants, by variantKey (plan/variant_key.h).
     std::vector<std::string> pinnedVariants, hiddenVariants;
-    OrderedJson unknownFields = OrderedJson::object();
+    UnknownFields unknownFields;
 
     // Index of the room with this id, or -1.
     int roomIndex(const std::string& id) const;

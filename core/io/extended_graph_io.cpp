@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: MIT
 #include "io/extended_graph_io.h"
 
+#include <nlohmann/json.hpp>
+
 #include <set>
 
 namespace abut {

@@ -5,6 +5,7 @@
 #include "plan/unmet.h"
 
 #include <cmath>
+#include <nlohmann/json.hpp>
 
 namespace abut {
 

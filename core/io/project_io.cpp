@@ -7,6 +7,7 @@
 #include <cmath>
 #include <set>
 #include <sstream>
+#include <nlohmann/json.hpp>
 
 namespace abut {
 
@@ -445,7 +446,7 @@ std::string serializeProject(const Brief& brief) {
                 if (room.facade.has(s)) f.push_back(std::string(1, sideLetter(s)));
             j["facade"] = f;
         }
-        for (auto it = room.unknownFields.begin(); it != room.unknownFields.end(); ++it)
+        for (auto it = room.unknownFields.json().begin(); it != room.unknownFields.json().end(); ++it)
             j[it.key()] = it.value();
         rooms.push_back(j);
     }
@@ -456,7 +457,7 @@ std::string serializeProject(const Brief& brief) {
         j["rooms"] = {a.a, a.b};
         j["kind"] = toString(a.kind);
         j["priority"] = toString(a.priority);
-        for (auto it = a.unknownFields.begin(); it != a.unknownFields.end(); ++it)
+        for (auto it = a.unknownFields.json().begin(); it != a.unknownFields.json().end(); ++it)
             j[it.key()] = it.value();
         adjs.push_back(j);
     }
@@ -472,7 +473,7 @@ std::string serializeProject(const Brief& brief) {
         if (!brief.hiddenVariants.empty()) v["hidden"] = brief.hiddenVariants;
         doc["variants"] = v;
     }
-    for (auto it = brief.unknownFields.begin(); it != brief.unknownFields.end(); ++it)
+    for (auto it = brief.unknownFields.json().begin(); it != brief.unknownFields.json().end(); ++it)
         doc[it.key()] = it.value();
     return doc.dump(2) + "\n";
 }
