@@ -126,6 +126,7 @@ struct Brief {
     std::vector<std::pair<std::string, SketchPoint>> sketch; // in file order
     // The planner's choices among plan variants, by variantKey (plan/variant_key.h).
     std::vector<std::string> pinnedVariants, hiddenVariants;
+    UnknownFields footprintUnknownFields; // fields of `footprint` beyond width and depth, kept
     UnknownFields unknownFields;
 
     // Index of the room with this id, or -1.

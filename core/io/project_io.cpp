@@ -234,6 +234,8 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
             auto w = r.positive(f, "width", "/footprint/width", "footprint width", minLength, maxLength);
             auto d = r.positive(f, "depth", "/footprint/depth", "footprint depth", minLength, maxLength);
             if (w && d) brief.footprint = Footprint{*w, *d};
+            // Fields of the footprint not planned yet (cut-outs) are kept for the round trip.
+            brief.footprintUnknownFields = unknownOf(f, {"width", "depth"});
         }
     }
     if (doc.contains("surplus")) {
@@ -427,6 +429,8 @@ std::string serializeProject(const Brief& brief) {
     doc["units"] = brief.units;
     if (brief.footprint)
         doc["footprint"] = {{"width", brief.footprint->width}, {"depth", brief.footprint->depth}};
+        for (auto it = brief.footprintUnknownFields.json().begin(); it != brief.footprintUnknownFields.json().end(); ++it)
+            doc["footprint"][it.key()] = it.value();
     doc["doorWidth"] = brief.doorWidth;
     if (brief.surplus == Surplus::Spread) doc["surplus"] = "spread"; // "spare" is the default
     OrderedJson rooms = OrderedJson::array();
