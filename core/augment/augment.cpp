@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: MIT
 #include "augment/augment.h"
+#include "augment/wording.h"
 
 #include "augment/connect.h"
 #include "augment/separating_triangles.h"
@@ -60,11 +61,6 @@ public:
 
 private:
     std::string name(int room) const { return brief_.rooms[room].displayName(); }
-    std::string describe(int adj) const {
-        const Adjacency& a = brief_.adjacencies[adj];
-        return name(brief_.roomIndex(a.a)) + "–" + name(brief_.roomIndex(a.b)) + " (" +
-               toString(a.kind) + ", " + toString(a.priority) + ")";
-    }
     double cost(int u, int v) const {
         const auto it = briefEdge_.find(ordered(u, v));
         return it == briefEdge_.end() ? addedContactCost : adjacencyCost(brief_.adjacencies[it->second]);
@@ -80,24 +76,13 @@ private:
         result_.diagnostics.push_back(
             {sev, std::move(code), std::move(message), std::move(rooms), std::move(adjacencies)});
     }
-    std::string roomList(std::vector<int> rooms) const {
-        std::string s;
-        for (std::size_t i = 0; i < rooms.size(); ++i) {
-            if (i) s += (i + 1 == rooms.size()) ? " and " : ", ";
-            s += name(rooms[i]);
-        }
-        return s;
-    }
 
     PlaneGraph embedDroppingCrossings();
     std::optional<PlaneGraph> embedWithPoles(const std::vector<Edge>& edges) const;
     bool embedWithFacades(const std::vector<std::pair<int, int>>& edges, PlaneGraph& out) const;
     void reportAddedContacts(const std::vector<Edge>& added, const char* why);
     void noteSpares(int count) {
-        note(Severity::Info, DiagnosticCode::SpareSpace,
-             "The plan needs " + std::to_string(count) +
-                 " spare space(s): gaps where no further wall between rooms could be added.",
-             {});
+        note(Severity::Info, DiagnosticCode::SpareSpace, wording::spareSpaces(count), {});
     }
     std::vector<int> chooseOuterFace(const PlaneGraph& g) const;
     void bringWishingPendantsOut(PlaneGraph& g) const;
@@ -123,59 +108,46 @@ private:
 
 PlaneGraph Builder::embedDroppingCrossings() {
     std::vector<Edge> edges;
-    std::vector<int> edgeAdj;
-    for (std::size_t i = 0; i < brief_.adjacencies.size(); ++i) {
-        edges.push_back(ordered(brief_.roomIndex(brief_.adjacencies[i].a),
-                                brief_.roomIndex(brief_.adjacencies[i].b)));
-        edgeAdj.push_back(static_cast<int>(i));
+    std::vector<double> costs;
+    for (const Adjacency& a : brief_.adjacencies) {
+        edges.push_back(ordered(brief_.roomIndex(a.a), brief_.roomIndex(a.b)));
+        costs.push_back(cost(edges.back().first, edges.back().second));
     }
     for (const Room& r : brief_.rooms) {
         const SketchPoint* p = brief_.sketchPosition(r.id);
         sketch_.push_back(p ? std::optional<SketchPoint>(*p) : std::nullopt);
     }
-    bool firstWitness = true;
-    for (;;) {
-        EmbeddingResult e = embedPlanar(n_, edges, sketch_);
-        if (e.status == EmbeddingStatus::Planar) {
-            result_.embeddingFromSketch = e.fromSketch;
-            if (!e.fromSketch) {
-                PlaneGraph guided;
-                if (embedWithFacades(edges, guided)) return guided;
+    PlanarizedEmbedding planar = embedDroppingCheapest(n_, edges, costs, sketch_);
+    // Name the first conflict, then each adjacency given up.
+    for (std::size_t k = 0; k < planar.dropped.size(); ++k) {
+        if (k == 0) {
+            std::vector<int> rooms;
+            std::map<int, int> degree;
+            for (int adj : planar.witnesses[0]) {
+                rooms.push_back(edges[adj].first);
+                rooms.push_back(edges[adj].second);
+                ++degree[edges[adj].first];
+                ++degree[edges[adj].second];
             }
-            return std::move(e.graph);
-        }
-        // Name the conflict, then give up its cheapest adjacency and retry.
-        std::vector<int> rooms, adjs;
-        std::map<int, int> degree;
-        int cheapest = e.witnessEdges.front();
-        for (int we : e.witnessEdges) {
-            adjs.push_back(edgeAdj[we]);
-            rooms.push_back(edges[we].first);
-            rooms.push_back(edges[we].second);
-            ++degree[edges[we].first];
-            ++degree[edges[we].second];
-            if (cost(edges[we].first, edges[we].second) < cost(edges[cheapest].first, edges[cheapest].second))
-                cheapest = we;
-        }
-        if (firstWitness) {
             int deg4 = 0;
             for (const auto& [v, d] : degree) deg4 += d == 4;
-            std::string list;
-            for (std::size_t i = 0; i < adjs.size(); ++i) list += (i ? "; " : "") + describe(adjs[i]);
-            note(Severity::Error, DiagnosticCode::NonPlanar,
-                 "These adjacencies cannot all be drawn on one floor without two of them crossing "
-                 "(they contain the pattern of " + std::string(deg4 >= 5 ? "five rooms all touching each other, K5" :
-                 "two groups of three rooms each touching all of the other group, K3,3") + "): " + list + ".",
-                 rooms, adjs);
-            firstWitness = false;
+            note(Severity::Error, DiagnosticCode::NonPlanar, wording::nonPlanar(brief_, planar.witnesses[0], deg4 >= 5),
+                 rooms, planar.witnesses[0]);
         }
-        const int drop = edgeAdj[cheapest];
-        note(Severity::Warning, DiagnosticCode::DroppedAdjacency,
-             "Dropped " + describe(drop) + " so that the rest can be drawn without crossings.",
-             {edges[cheapest].first, edges[cheapest].second}, {drop});
-        edges.erase(edges.begin() + cheapest);
-        edgeAdj.erase(edgeAdj.begin() + cheapest);
+        const int drop = planar.dropped[k];
+        note(Severity::Warning, DiagnosticCode::DroppedAdjacency, wording::droppedForCrossings(brief_, drop),
+             {edges[drop].first, edges[drop].second}, {drop});
     }
+    std::vector<Edge> kept;
+    for (std::size_t i = 0; i < edges.size(); ++i)
+        if (std::find(planar.dropped.begin(), planar.dropped.end(), static_cast<int>(i)) == planar.dropped.end())
+            kept.push_back(edges[i]);
+    result_.embeddingFromSketch = planar.embedding.fromSketch;
+    if (!planar.embedding.fromSketch) {
+        PlaneGraph guided;
+        if (embedWithFacades(kept, guided)) return guided;
+    }
+    return std::move(planar.embedding.graph);
 }
 
 // The rooms embedded together with four pole vertices: a cycle N–E–S–W, each
@@ -239,9 +211,7 @@ bool Builder::embedWithFacades(const std::vector<std::pair<int, int>>& edges, Pl
 
 void Builder::reportAddedContacts(const std::vector<Edge>& added, const char* why) {
     for (const auto& [u, v] : added)
-        note(Severity::Info, DiagnosticCode::AddedContact,
-             name(u) + " and " + name(v) + " share a wall the brief did not ask for (" + why + ").",
-             {u, v});
+        note(Severity::Info, DiagnosticCode::AddedContact, wording::addedContact(brief_, u, v, why), {u, v});
 }
 
 std::vector<int> Builder::chooseOuterFace(const PlaneGraph& g) const {
@@ -276,10 +246,7 @@ bool Builder::breakSeparatingTriangles(PlaneGraph& g, const std::vector<int>& ou
     if (sep.empty()) return false;
     const Cover cover = cheapestCover(sep, [this](int u, int v) { return cost(u, v); });
     if (!cover.exact)
-        note(Severity::Info, DiagnosticCode::CoverApproximate,
-             "Many rooms enclose each other here; the adjacencies to give up were chosen greedily and may "
-             "not be the fewest possible.",
-             {});
+        note(Severity::Info, DiagnosticCode::CoverApproximate, wording::coverApproximate(), {});
     for (const auto& [u, v] : cover.edges) {
         // Explain with one triangle this edge breaks, and what it encloses.
         const Triangle* t = nullptr;
@@ -296,20 +263,9 @@ bool Builder::breakSeparatingTriangles(PlaneGraph& g, const std::vector<int>& ou
         g.removeEdge(u, v);
         if (adj < 0) continue; // an added contact: nothing of the brief is lost
         std::vector<int> rooms{(*t)[0], (*t)[1], (*t)[2]};
-        std::string why;
-        if (fourth >= 0) {
-            rooms.push_back(fourth);
-            why = roomList(rooms) + " must all touch each other. Four rectangles cannot all share "
-                  "walls pairwise: one of them would be boxed in by the other three";
-        } else {
-            why = roomList({(*t)[0], (*t)[1], (*t)[2]}) +
-                  " all touch each other around other rooms; rectangles cannot enclose rooms that "
-                  "way (a separating triangle)";
-        }
-        note(Severity::Warning, DiagnosticCode::DroppedAdjacency,
-             why + ". Dropped " + describe(adj) + "; to keep it, let one of these pairs meet through "
-                   "another room or make it 'should'.",
-             rooms, {adj});
+        const std::string text = wording::droppedForSeparatingTriangle(brief_, rooms, fourth, adj);
+        if (fourth >= 0) rooms.push_back(fourth);
+        note(Severity::Warning, DiagnosticCode::DroppedAdjacency, text, rooms, {adj});
     }
     return true;
 }
@@ -420,9 +376,7 @@ CornerSearch Builder::relaxFacadeWishes(const PlaneGraph& g, const std::vector<i
     for (const std::vector<int>& ignored : tries) {
         CornerSearch s = without(ignored);
         if (s.assignments.empty()) continue;
-        note(Severity::Warning, DiagnosticCode::FacadeConflict,
-             "The facade sides asked for " + roomList(sided) +
-                 " cannot all be met at once; the plan gives up the sides of " + roomList(ignored) + ".",
+        note(Severity::Warning, DiagnosticCode::FacadeConflict, wording::facadeConflict(brief_, sided, ignored),
              ignored);
         return s;
     }
@@ -533,7 +487,7 @@ bool Builder::smallBrief() {
 AugmentResult Builder::run() {
     if (n_ == 0) {
         result_.status = AugmentStatus::Empty;
-        result_.summary = "The brief has no rooms yet.";
+        result_.summary = wording::summaryEmpty();
         return result_;
     }
     PlaneGraph g = embedDroppingCrossings();
@@ -585,9 +539,7 @@ AugmentResult Builder::run() {
             const int adj = adjacencyIndex(chord.first, chord.second);
             g.removeEdge(chord.first, chord.second);
             if (adj >= 0)
-                note(Severity::Warning, DiagnosticCode::DroppedAdjacency,
-                     "Dropped " + describe(adj) + ": with it, the rooms on the outline could not be "
-                     "split into four facade sides.",
+                note(Severity::Warning, DiagnosticCode::DroppedAdjacency, wording::droppedForOutline(brief_, adj),
                      {chord.first, chord.second}, {adj});
             continue;
         }
@@ -729,9 +681,7 @@ void Builder::considerPoleRoute(const PlaneGraph& rooms, std::size_t sharedNotes
         const int a = brief_.roomIndex(brief_.adjacencies[i].a), b = brief_.roomIndex(brief_.adjacencies[i].b);
         if (rooms.hasEdge(a, b) && !result_.extended.graph.hasEdge(a, b))
             note(Severity::Warning, DiagnosticCode::DroppedAdjacency,
-                 "Dropped " + describe(static_cast<int>(i)) +
-                     ": with it, some rooms would enclose others (a separating triangle).",
-                 {a, b}, {static_cast<int>(i)});
+                 wording::droppedForEnclosure(brief_, static_cast<int>(i)), {a, b}, {static_cast<int>(i)});
     }
     std::vector<Edge> contacts;
     for (const Edge& a : firstAdded)
@@ -748,15 +698,8 @@ void Builder::finish() {
         const int a = brief_.roomIndex(brief_.adjacencies[i].a), b = brief_.roomIndex(brief_.adjacencies[i].b);
         if (!x.graph.hasEdge(a, b)) result_.dropped.push_back(static_cast<int>(i));
     }
-    for (int v : result_.unmetFacade) {
-        std::string sides;
-        for (Side s : allSides)
-            if (wishes_[v].has(s)) sides += sides.empty() ? std::string(1, sideLetter(s)) : std::string(", ") + sideLetter(s);
-        note(Severity::Warning, DiagnosticCode::FacadeUnmet,
-             name(v) + " does not reach " + (sides.empty() ? std::string("an outside wall") : "the " + sides + " facade") +
-                 " in this plan.",
-             {v});
-    }
+    for (int v : result_.unmetFacade)
+        note(Severity::Warning, DiagnosticCode::FacadeUnmet, wording::facadeUnmet(brief_, v), {v});
     bool mustLost = false;
     for (int d : result_.dropped) mustLost = mustLost || brief_.adjacencies[d].priority == Priority::Must;
     result_.status = (mustLost || !result_.unmetFacade.empty()) ? AugmentStatus::Compromised
@@ -764,21 +707,15 @@ void Builder::finish() {
     const StageCheck check = checkExtendedGraph(x, brief_, result_.dropped);
     if (!check.ok) {
         result_.status = AugmentStatus::Internal;
-        result_.summary = "Internal error: the extended graph failed its check (" + check.problem +
-                          "). Please report this brief.";
+        result_.summary = wording::summaryInternal(check.problem);
         return;
     }
     if (result_.status == AugmentStatus::Feasible) {
-        result_.summary = result_.dropped.empty()
-                              ? "A rectangular plan exists with every adjacency and facade wish."
-                              : "A rectangular plan exists with every 'must' adjacency and facade wish; " +
-                                    std::to_string(result_.dropped.size()) + " 'should' adjacency(ies) dropped.";
+        result_.summary = wording::summaryFeasible(static_cast<int>(result_.dropped.size()));
     } else {
         int musts = 0;
         for (int d : result_.dropped) musts += brief_.adjacencies[d].priority == Priority::Must;
-        result_.summary = "No rectangular plan keeps the whole brief: " + std::to_string(musts) +
-                          " 'must' adjacency(ies) dropped, " + std::to_string(result_.unmetFacade.size()) +
-                          " facade wish(es) unmet.";
+        result_.summary = wording::summaryCompromised(musts, static_cast<int>(result_.unmetFacade.size()));
     }
 }
 

@@ -141,4 +141,30 @@ EmbeddingResult embedPlanar(int n, const std::vector<std::pair<int, int>>& edges
     return result;
 }
 
+PlanarizedEmbedding embedDroppingCheapest(int n, const std::vector<std::pair<int, int>>& edges,
+                                          const std::vector<double>& cost,
+                                          const std::vector<std::optional<SketchPoint>>& sketch) {
+    PlanarizedEmbedding out;
+    std::vector<std::pair<int, int>> left = edges;
+    std::vector<int> index(edges.size()); // position in `left` → index into `edges`
+    for (std::size_t i = 0; i < index.size(); ++i) index[i] = static_cast<int>(i);
+    for (;;) {
+        EmbeddingResult e = embedPlanar(n, left, sketch);
+        if (e.status == EmbeddingStatus::Planar) {
+            out.embedding = std::move(e);
+            return out;
+        }
+        std::vector<int> witness;
+        int cheapest = e.witnessEdges.front();
+        for (int we : e.witnessEdges) {
+            witness.push_back(index[we]);
+            if (cost[index[we]] < cost[index[cheapest]]) cheapest = we;
+        }
+        out.witnesses.push_back(std::move(witness));
+        out.dropped.push_back(index[cheapest]);
+        left.erase(left.begin() + cheapest);
+        index.erase(index.begin() + cheapest);
+    }
+}
+
 } // namespace abut

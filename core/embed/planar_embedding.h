@@ -36,6 +36,21 @@ constexpr int sketchCrossingLimit = 4000;
 EmbeddingResult embedPlanar(int n, const std::vector<std::pair<int, int>>& edges,
                             const std::vector<std::optional<SketchPoint>>& sketch = {});
 
+// Embeds a graph that may not be planar by dropping edges: each time the
+// test finds a Kuratowski subgraph, the cheapest of its edges (by `cost`,
+// the first of equal ones in witness order) is dropped and the test runs
+// again. `witnesses` lists each Kuratowski subgraph found and `dropped` the
+// edge given up for it (indices into `edges`), in order; `embedding` is that
+// of the edges left. O(k·(n + m)) for k drops.
+struct PlanarizedEmbedding {
+    EmbeddingResult embedding;             // Planar
+    std::vector<std::vector<int>> witnesses; // per drop: the witness's edges
+    std::vector<int> dropped;                // per drop: the edge given up
+};
+PlanarizedEmbedding embedDroppingCheapest(int n, const std::vector<std::pair<int, int>>& edges,
+                                          const std::vector<double>& cost,
+                                          const std::vector<std::optional<SketchPoint>>& sketch = {});
+
 // Pairs of input edges whose straight segments cross in the sketch (edges
 // sharing an endpoint never count). O(m²).
 std::vector<std::pair<int, int>> sketchCrossings(const std::vector<std::pair<int, int>>& edges,

@@ -80,6 +80,7 @@ private slots:
     void kuratowskiWitness_data();
     void kuratowskiWitness();
     void maximalPlanarEdgeCount();
+    void droppingTheCheapestLeavesAPlanarGraph();
 
     // The tidy-up's straight-line drawing.
     void tidyDrawsSamplesWithoutCrossings_data() {
@@ -158,6 +159,34 @@ void TestEmbed::maximalPlanarEdgeCount() {
     const EmbeddingResult e = embedPlanar(30, edges);
     QCOMPARE(e.status, EmbeddingStatus::Planar);
     QCOMPARE(static_cast<int>(e.graph.faces().size()), 2 * 30 - 4);
+}
+
+// K5 gives up one edge and K6 at least three (a simple planar graph on n
+// vertices has at most 3n − 6 edges: 9 for K5's 10, 12 for K6's 15; Euler's
+// formula). Each edge given up is the cheapest of its witness, and each
+// witness is a Kuratowski subgraph by Boost's own checker.
+void TestEmbed::droppingTheCheapestLeavesAPlanarGraph() {
+    for (int n : {5, 6}) {
+        const auto edges = completeGraph(n);
+        std::vector<double> cost(edges.size());
+        for (std::size_t i = 0; i < cost.size(); ++i) cost[i] = 1.0 + static_cast<double>((i * 7) % 5);
+        const PlanarizedEmbedding p = embedDroppingCheapest(n, edges, cost);
+        QCOMPARE(p.embedding.status, EmbeddingStatus::Planar);
+        QVERIFY(static_cast<int>(edges.size() - p.dropped.size()) <= 3 * n - 6);
+        QVERIFY(p.dropped.size() >= edges.size() - static_cast<std::size_t>(3 * n - 6));
+        QCOMPARE(p.witnesses.size(), p.dropped.size());
+        QCOMPARE(p.embedding.graph.edgeCount(), static_cast<int>(edges.size() - p.dropped.size()));
+        for (std::size_t k = 0; k < p.dropped.size(); ++k) {
+            for (int e : p.witnesses[k]) QVERIFY(cost[p.dropped[k]] <= cost[e]);
+            using G = boost::adjacency_list<boost::vecS, boost::vecS, boost::undirectedS,
+                                            boost::property<boost::vertex_index_t, int>,
+                                            boost::property<boost::edge_index_t, int>>;
+            G g(n);
+            std::vector<boost::graph_traits<G>::edge_descriptor> witness;
+            for (int e : p.witnesses[k]) witness.push_back(boost::add_edge(edges[e].first, edges[e].second, g).first);
+            QVERIFY(boost::is_kuratowski_subgraph(g, witness.begin(), witness.end()));
+        }
+    }
 }
 
 QTEST_GUILESS_MAIN(TestEmbed)
