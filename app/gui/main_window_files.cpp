@@ -238,11 +238,8 @@ bool MainWindow::exportCurrent(const QString& path, QString* error) {
         if (error) *error = tr("There is no plan to export yet.");
         return false;
     }
-    Plan plan;
+    const Plan plan = session_->currentAsPlan();
     const PlanVariant& current = session_->current();
-    plan.units = session_->plannedFor().units;
-    plan.footprint = session_->footprint();
-    plan.variants = {current};
     render::ExportOptions o;
     o.sheet.project = doc_->path().isEmpty() ? tr("Untitled") : QFileInfo(doc_->path()).completeBaseName().section(QLatin1Char('.'), 0, 0);
     o.sheet.variantRank = current.rank;
@@ -276,11 +273,8 @@ void MainWindow::printSheet() {
     printer.setPageMargins(QMarginsF(0, 0, 0, 0), QPageLayout::Millimeter);
     QPrintDialog dialog(&printer, this);
     if (dialog.exec() != QDialog::Accepted) return;
-    Plan plan;
+    const Plan plan = session_->currentAsPlan();
     const PlanVariant& current = session_->current();
-    plan.units = session_->plannedFor().units;
-    plan.footprint = session_->footprint();
-    plan.variants = {current};
     render::SheetOptions o;
     o.project = displayName(doc_->path());
     o.variantRank = current.rank;

@@ -154,6 +154,14 @@ Brief PlanSession::handSized(const Brief& brief, const PlanVariant& resized, int
     return b;
 }
 
+Plan PlanSession::currentAsPlan() const {
+    Plan plan;
+    plan.units = planBrief_.units;
+    plan.footprint = planFootprint_;
+    if (haveCurrent_) plan.variants = {current_};
+    return plan;
+}
+
 bool PlanSession::takeWaitingLayout() {
     const bool waiting = handLayoutWaiting_;
     handLayoutWaiting_ = false;

@@ -62,6 +62,8 @@ public:
     const Footprint& footprint() const { return planFootprint_; }
     const std::vector<PlanVariant>& variants() const { return variants_; }
     QString currentKey() const;
+    // The variant on show as a plan of its own (for export and printing).
+    Plan currentAsPlan() const;
 
 signals:
     void currentChanged();  // the variant on show, its brief or its sizes changed

@@ -14,15 +14,9 @@
 
 using namespace abut;
 using abut::testing::briefFromEdges;
+using abut::testing::completeGraph;
 
 namespace {
-
-std::vector<std::pair<int, int>> completeGraph(int n) {
-    std::vector<std::pair<int, int>> e;
-    for (int i = 0; i < n; ++i)
-        for (int j = i + 1; j < n; ++j) e.emplace_back(i, j);
-    return e;
-}
 
 bool hasCode(const AugmentResult& r, DiagnosticCode code) {
     return std::any_of(r.diagnostics.begin(), r.diagnostics.end(),

@@ -20,33 +20,15 @@
 #include <set>
 
 using namespace abut;
+using abut::testing::completeGraph;
 
 namespace {
-
-std::vector<std::pair<int, int>> completeGraph(int n) {
-    std::vector<std::pair<int, int>> e;
-    for (int i = 0; i < n; ++i)
-        for (int j = i + 1; j < n; ++j) e.emplace_back(i, j);
-    return e;
-}
 
 std::vector<std::pair<int, int>> completeBipartite33() {
     std::vector<std::pair<int, int>> e;
     for (int i = 0; i < 3; ++i)
         for (int j = 3; j < 6; ++j) e.emplace_back(i, j);
     return e;
-}
-
-Brief briefOf(int n, const std::vector<std::pair<int, int>>& edges) {
-    Brief b;
-    for (int i = 0; i < n; ++i) {
-        Room r;
-        r.id = "r" + std::to_string(i);
-        r.area = 10;
-        addRoom(b, r);
-    }
-    for (auto [u, v] : edges) addAdjacency(b, {b.rooms[u].id, b.rooms[v].id});
-    return b;
 }
 
 // Crossings checked with Qt's segment intersection, independent of core's
@@ -116,7 +98,7 @@ private slots:
 
     void tidyNonPlanarLeavesOut() {
         // K5: ten adjacencies, one must go (Kuratowski).
-        const Brief b = briefOf(5, completeGraph(5));
+        const Brief b = abut::testing::briefFromEdges(5, completeGraph(5));
         const TidyResult t = tidySketch(b);
         QCOMPARE(t.status, TidyStatus::DrawnWithout);
         QCOMPARE(t.leftOut.size(), std::size_t(1));

@@ -12,6 +12,7 @@
 #include "export/svg_writer.h"
 #include "io/project_io.h"
 #include "plan/plan_builder.h"
+#include "../support/sample_plan.h"
 
 #include <QXmlStreamReader>
 #include <QtTest>
@@ -27,15 +28,10 @@ class TestExport : public QObject {
 
 private slots:
     void initTestCase() {
-        const LoadResult l = loadProject(ABUT_SAMPLES "/family-house.abut.json");
-        QVERIFY(l.ok());
-        brief_ = l.brief;
-        PlanOptions o;
-        o.threads = 1;
-        o.timeLimit = 20;
-        o.relaxations = false;
-        plan_ = buildPlan(brief_, o);
-        QVERIFY(!plan_.variants.empty());
+        const abut::testing::SamplePlan s = abut::testing::planSample(ABUT_SAMPLES "/family-house.abut.json");
+        QVERIFY(s.ok);
+        brief_ = s.brief;
+        plan_ = s.plan;
     }
 
     void scheduleAddsUpToTheFootprint() {

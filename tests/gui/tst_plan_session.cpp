@@ -8,6 +8,7 @@
 #include "plan/plan_builder.h"
 #include "plan/variant_key.h"
 #include "plan_session.h"
+#include "../support/sample_plan.h"
 
 #include <QSignalSpy>
 #include <QtTest>
@@ -37,14 +38,10 @@ class TestPlanSession : public QObject {
 
 private slots:
     void initTestCase() {
-        const LoadResult loaded = loadProject(ABUT_SAMPLES "/family-house.abut.json");
-        QVERIFY(loaded.ok());
-        house_ = loaded.brief;
-        PlanOptions o;
-        o.threads = 1;
-        o.timeLimit = 20;
-        o.relaxations = false;
-        plan_ = buildPlan(house_, o);
+        const abut::testing::SamplePlan s = abut::testing::planSample(ABUT_SAMPLES "/family-house.abut.json");
+        QVERIFY(s.ok);
+        house_ = s.brief;
+        plan_ = s.plan;
         QVERIFY(plan_.variants.size() >= 2);
     }
 

@@ -82,6 +82,14 @@ inline Brief randomBrief(const RandomBriefOptions& o, std::mt19937& rng) {
 }
 
 // Brief over the given edges with every adjacency a 'must' door.
+// K_n: every pair of 0..n−1.
+inline std::vector<std::pair<int, int>> completeGraph(int n) {
+    std::vector<std::pair<int, int>> e;
+    for (int i = 0; i < n; ++i)
+        for (int j = i + 1; j < n; ++j) e.emplace_back(i, j);
+    return e;
+}
+
 inline Brief briefFromEdges(int n, const std::vector<std::pair<int, int>>& edges) {
     Brief b;
     for (int i = 0; i < n; ++i) b.rooms.push_back(Room{"r" + std::to_string(i), "", 10.0});
