@@ -60,7 +60,6 @@ public:
     AugmentResult run();
 
 private:
-    std::string name(int room) const { return brief_.rooms[room].displayName(); }
     double cost(int u, int v) const {
         const auto it = briefEdge_.find(ordered(u, v));
         return it == briefEdge_.end() ? addedContactCost : adjacencyCost(brief_.adjacencies[it->second]);
