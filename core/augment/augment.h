@@ -62,13 +62,11 @@ struct AugmentResult {
     std::vector<ExtendedGraph> alternatives;
 };
 
-// Two routes. The frame route above works on the rooms alone and chooses the
-// outline as a cycle of rooms. The pole route puts the four sides in first,
-// each joined to the rooms that wish it, and completes the inside: it finds
-// plans where a room must appear twice on the outline (a room reaching two
-// opposite sides cuts the rest in two), which a cycle cannot describe. The
-// route that keeps more of the brief gives `extended` and the diagnostics;
-// the other one's graphs, when valid, are listed in `alternatives`.
+// Two routes (augment/route.h): the frame route chooses the outline as a
+// cycle of rooms; the pole route puts the four sides in first and finds plans
+// where a room must appear twice on the outline. The route that keeps more of
+// the brief gives `extended` and the diagnostics; the other one's graphs, when
+// valid, are listed in `alternatives`.
 AugmentResult buildExtendedGraph(const Brief& brief, const AugmentOptions& options = {});
 
 // Poles and triangulation for one corner assignment of a prepared frame.
