@@ -32,7 +32,6 @@ const char* toString(AugmentStatus s) {
 namespace {
 
 using Edge = RouteContext::Edge;
-Edge ordered(int a, int b) { return a < b ? Edge{a, b} : Edge{b, a}; }
 
 // The stages both routes share — the embedding (crossings dropped), the
 // small briefs written out directly, joining separate groups — then the two
@@ -61,7 +60,7 @@ PlaneGraph Builder::embedDroppingCrossings() {
     std::vector<Edge> edges;
     std::vector<double> costs;
     for (const Adjacency& a : ctx_.brief().adjacencies) {
-        edges.push_back(ordered(ctx_.brief().roomIndex(a.a), ctx_.brief().roomIndex(a.b)));
+        edges.push_back(RouteContext::ordered(ctx_.brief().roomIndex(a.a), ctx_.brief().roomIndex(a.b)));
         costs.push_back(ctx_.cost(edges.back().first, edges.back().second));
     }
     PlanarizedEmbedding planar = embedDroppingCheapest(n_, edges, costs, ctx_.sketch());

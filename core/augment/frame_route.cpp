@@ -21,7 +21,6 @@ namespace abut {
 namespace {
 
 using Edge = RouteContext::Edge;
-Edge ordered(int a, int b) { return a < b ? Edge{a, b} : Edge{b, a}; }
 
 class FrameBuilder {
 public:
@@ -283,7 +282,7 @@ RouteOutcome FrameBuilder::run(PlaneGraph g) {
                     const int d = (static_cast<int>(it - outer.begin()) - i + k) % k;
                     if (d == 1 || d == k - 1) continue;
                     if (chord.first < 0 || ctx_.cost(outer[i], w) < ctx_.cost(chord.first, chord.second))
-                        chord = ordered(outer[i], w);
+                        chord = RouteContext::ordered(outer[i], w);
                 }
             const int adj = ctx_.adjacencyIndex(chord.first, chord.second);
             g.removeEdge(chord.first, chord.second);

@@ -10,7 +10,6 @@ namespace abut {
 
 namespace {
 
-RouteContext::Edge ordered(int a, int b) { return a < b ? RouteContext::Edge{a, b} : RouteContext::Edge{b, a}; }
 
 double adjacencyCost(const Adjacency& a) {
     return (a.priority == Priority::Must ? 10000.0 : 100.0) + (a.kind == AdjacencyKind::Door ? 10.0 : 0.0);
@@ -21,7 +20,7 @@ double adjacencyCost(const Adjacency& a) {
 RouteContext::RouteContext(const Brief& brief, const AugmentOptions& options) : brief_(brief), options_(options) {
     n_ = static_cast<int>(brief.rooms.size());
     for (std::size_t i = 0; i < brief.adjacencies.size(); ++i)
-        briefEdge_[ordered(brief.roomIndex(brief.adjacencies[i].a), brief.roomIndex(brief.adjacencies[i].b))] =
+        briefEdge_[RouteContext::ordered(brief.roomIndex(brief.adjacencies[i].a), brief.roomIndex(brief.adjacencies[i].b))] =
             static_cast<int>(i);
     for (const Room& r : brief.rooms) {
         ids_.push_back(r.id);
@@ -32,12 +31,12 @@ RouteContext::RouteContext(const Brief& brief, const AugmentOptions& options) : 
 }
 
 double RouteContext::cost(int u, int v) const {
-    const auto it = briefEdge_.find(ordered(u, v));
+    const auto it = briefEdge_.find(RouteContext::ordered(u, v));
     return it == briefEdge_.end() ? addedContactCost : adjacencyCost(brief_.adjacencies[it->second]);
 }
 
 int RouteContext::adjacencyIndex(int u, int v) const {
-    const auto it = briefEdge_.find(ordered(u, v));
+    const auto it = briefEdge_.find(RouteContext::ordered(u, v));
     return it == briefEdge_.end() ? -1 : it->second;
 }
 

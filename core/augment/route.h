@@ -40,6 +40,7 @@ namespace abut {
 class RouteContext {
 public:
     using Edge = std::pair<int, int>;
+    static Edge ordered(int a, int b) { return a < b ? Edge{a, b} : Edge{b, a}; }
     RouteContext(const Brief& brief, const AugmentOptions& options);
 
     const Brief& brief() const { return brief_; }
