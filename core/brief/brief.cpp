@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: MIT
 #include "brief/brief.h"
 
+#include <algorithm>
+
 #include <nlohmann/json.hpp>
 
 #include <cmath>
@@ -45,7 +47,7 @@ Footprint Brief::effectiveFootprint() const {
     // proportion 4:3, a common plan proportion (common practice, no source).
     const double area = totalTargetArea();
     const double width = std::sqrt(area * 4.0 / 3.0);
-    return {width, width > 0 ? area / width : 0.0};
+    return {width, width > 0 ? area / width : 0.0, {}};
 }
 
 const SketchPoint* Brief::sketchPosition(const std::string& id) const {
@@ -65,13 +67,96 @@ std::size_t controlCharacterAt(const std::string& text) {
     return std::string::npos;
 }
 
+double Footprint::netArea() const {
+    double a = width * depth;
+    for (const Placement& c : cutouts) a -= c.area();
+    return a;
+}
+
+double overlapArea(const Placement& a, const Placement& b) {
+    const double w = std::min(a.x + a.width, b.x + b.width) - std::max(a.x, b.x);
+    const double d = std::min(a.y + a.depth, b.y + b.depth) - std::max(a.y, b.y);
+    return w > 0 && d > 0 ? w * d : 0.0;
+}
+
+bool overlaps(const Placement& a, const Placement& b, double tolerance) {
+    const double w = std::min(a.x + a.width, b.x + b.width) - std::max(a.x, b.x);
+    const double d = std::min(a.y + a.depth, b.y + b.depth) - std::max(a.y, b.y);
+    return w > tolerance && d > tolerance;
+}
+
+bool isConnected(const Footprint& fp) {
+    // Cells of the grid through every cut-out edge; the building's cells are
+    // joined through shared sides.
+    std::vector<double> xs{0.0, fp.width}, ys{0.0, fp.depth};
+    for (const Placement& c : fp.cutouts) {
+        xs.insert(xs.end(), {c.x, c.x + c.width});
+        ys.insert(ys.end(), {c.y, c.y + c.depth});
+    }
+    for (auto* v : {&xs, &ys}) {
+        std::sort(v->begin(), v->end());
+        v->erase(std::unique(v->begin(), v->end()), v->end());
+    }
+    const int nx = static_cast<int>(xs.size()) - 1, ny = static_cast<int>(ys.size()) - 1;
+    if (nx <= 0 || ny <= 0) return false;
+    std::vector<char> building(static_cast<std::size_t>(nx * ny), 1);
+    int count = 0, start = -1;
+    for (int i = 0; i < nx; ++i)
+        for (int j = 0; j < ny; ++j) {
+            const Placement cell{xs[i], ys[j], xs[i + 1] - xs[i], ys[j + 1] - ys[j]};
+            for (const Placement& c : fp.cutouts)
+                if (overlapArea(cell, c) > 0.5 * cell.area()) building[i * ny + j] = 0;
+            if (building[i * ny + j]) {
+                ++count;
+                start = i * ny + j;
+            }
+        }
+    if (count == 0) return false;
+    std::vector<int> stack{start};
+    building[start] = 2;
+    int reached = 1;
+    while (!stack.empty()) {
+        const int c = stack.back();
+        stack.pop_back();
+        const int i = c / ny, j = c % ny;
+        const int next[4][2] = {{i + 1, j}, {i - 1, j}, {i, j + 1}, {i, j - 1}};
+        for (const auto& n : next) {
+            if (n[0] < 0 || n[0] >= nx || n[1] < 0 || n[1] >= ny) continue;
+            char& b = building[n[0] * ny + n[1]];
+            if (b != 1) continue;
+            b = 2;
+            ++reached;
+            stack.push_back(n[0] * ny + n[1]);
+        }
+    }
+    return reached == count;
+}
+
 Brief plannedBrief(const Brief& brief) {
     Brief out = brief;
-    if (brief.surplus != Surplus::Spread || !brief.footprint) return out;
-    const double total = brief.totalTargetArea();
-    const double area = brief.footprint->width * brief.footprint->depth;
+    if (!brief.footprint) return out;
+    const bool added = std::any_of(brief.rooms.begin(), brief.rooms.end(), [](const Room& r) { return r.cutout; });
+    if (!added)
+        for (std::size_t k = 0; k < brief.footprint->cutouts.size(); ++k) {
+            const Placement& c = brief.footprint->cutouts[k];
+            Room r;
+            r.id = "cutout-" + std::to_string(k + 1);
+            r.name = "Cut-out " + std::to_string(k + 1);
+            r.area = c.area();
+            r.areaTolerance = 0.0;
+            r.fixed = c;
+            r.cutout = true;
+            out.rooms.push_back(std::move(r));
+        }
+    if (brief.surplus != Surplus::Spread) return out;
+    double total = 0, area = brief.footprint->width * brief.footprint->depth;
+    for (const Room& r : out.rooms) {
+        if (r.fixed) area -= r.fixed->area();
+        else total += r.area;
+    }
     if (total <= 0 || total >= area) return out;
-    for (Room& r : out.rooms) r.area *= area / total;
+    for (Room& r : out.rooms)
+        if (!r.fixed) r.area *= area / total;
     return out;
 }
 

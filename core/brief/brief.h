@@ -76,6 +76,14 @@ std::size_t controlCharacterAt(const std::string& text);
 enum class AdjacencyKind : std::uint8_t { Door, Wall };
 enum class Priority : std::uint8_t { Must, Should };
 
+// A rectangle placed in the footprint: origin at its south-west corner, as
+// the project file gives cut-outs and fixed rooms.
+struct Placement {
+    double x = 0.0, y = 0.0, width = 0.0, depth = 0.0;
+    double area() const { return width * depth; }
+    bool operator==(const Placement&) const = default;
+};
+
 struct Room {
     std::string id;
     std::string name;
@@ -85,6 +93,10 @@ struct Room {
     std::optional<double> areaTolerance; // fraction: the band around `area` that counts as on target
     std::string category;
     FacadeWish facade;
+    std::optional<Placement> fixed; // stays exactly there in every variant (a stair and lift core)
+    // Not a room: a cut-out of the footprint, planned as a block held in place
+    // (plannedBrief adds them after the rooms; never read from or written to a file).
+    bool cutout = false;
     UnknownFields unknownFields; // kept for the round trip
 
     const std::string& displayName() const { return name.empty() ? id : name; }
@@ -101,10 +113,22 @@ struct Adjacency {
 };
 
 struct Footprint {
-    double width = 0.0; // x extent, east-west
+    double width = 0.0; // x extent, east-west (of the bounding rectangle)
     double depth = 0.0; // y extent, north-south
+    // Rectangles inside the bounding one that are not building (an L, a U, a
+    // courtyard). A wall on a cut-out is an exterior wall facing the side it faces.
+    std::vector<Placement> cutouts;
+    double netArea() const;
     bool operator==(const Footprint&) const = default;
 };
+
+// Area two placements share (0 when they only touch).
+double overlapArea(const Placement& a, const Placement& b);
+// Whether they share more than a hairline: overlapping by more than `tolerance` both ways.
+bool overlaps(const Placement& a, const Placement& b, double tolerance);
+// Whether the footprint minus its cut-outs is one piece (parts meeting at a
+// corner only are two). O(c³) for c cut-outs.
+bool isConnected(const Footprint& fp);
 
 struct SketchPoint {
     double x = 0.0, y = 0.0;
@@ -126,7 +150,7 @@ struct Brief {
     std::vector<std::pair<std::string, SketchPoint>> sketch; // in file order
     // The planner's choices among plan variants, by variantKey (plan/variant_key.h).
     std::vector<std::string> pinnedVariants, hiddenVariants;
-    UnknownFields footprintUnknownFields; // fields of `footprint` beyond width and depth, kept
+    UnknownFields footprintUnknownFields; // fields of `footprint` beyond width, depth and cutouts, kept
     UnknownFields unknownFields;
 
     // Index of the room with this id, or -1.
@@ -137,9 +161,13 @@ struct Brief {
     const SketchPoint* sketchPosition(const std::string& id) const;
 };
 
-// The brief as it is planned: with `surplus: spread`, every target grown in
-// proportion so that they fill the footprint; otherwise the brief itself.
+// The brief as it is planned: each cut-out of the footprint added after the
+// rooms as a room held in place (`cutout` set, id "cutout-1", …); with
+// `surplus: spread`, every target that is not held in place grown in
+// proportion so that they fill the rest. Applying it twice changes nothing.
 Brief plannedBrief(const Brief& brief);
+// Rooms of the brief the planner asked for (plannedBrief's cut-outs are not).
+inline bool isPlannedRoom(const Room& r) { return !r.cutout; }
 
 const char* toString(AdjacencyKind k);
 const char* toString(Priority p);

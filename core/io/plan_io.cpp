@@ -28,6 +28,12 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
     j["version"] = 1;
     j["units"] = plan.units;
     j["footprint"] = {{"width", plan.footprint.width}, {"depth", plan.footprint.depth}};
+    if (!plan.footprint.cutouts.empty()) {
+        OrderedJson cuts = OrderedJson::array();
+        for (const Placement& c : plan.footprint.cutouts)
+            cuts.push_back({{"x", c.x}, {"y", c.y}, {"width", c.width}, {"depth", c.depth}});
+        j["footprint"]["cutouts"] = cuts;
+    }
     j["doorWidth"] = brief.doorWidth;
     j["status"] = toString(plan.status);
     OrderedJson variants = OrderedJson::array();
@@ -36,7 +42,9 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
         vj["rank"] = v.rank;
         vj["score"] = tidy(v.score);
         OrderedJson rooms = OrderedJson::array();
-        for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+        // The brief's rooms; the cut-outs planned after them are the footprint's.
+        for (std::size_t i = 0; i < v.rooms.size() && i < brief.rooms.size(); ++i) {
+            if (brief.rooms[i].cutout) continue;
             OrderedJson r = {{"id", brief.rooms[i].id}};
             r.update(rectJson(v.rooms[i]));
             rooms.push_back(r);

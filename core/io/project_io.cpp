@@ -123,6 +123,43 @@ OrderedJson unknownOf(const OrderedJson& obj, std::initializer_list<const char*>
     return extra;
 }
 
+// {"x", "y", "width", "depth"} inside the footprint's bounding rectangle.
+std::optional<Placement> readPlacement(Reader& r, const OrderedJson& j, const std::string& ptr, const char* what,
+                                       const Footprint& fp) {
+    if (!j.is_object()) {
+        r.error(ptr, std::string(what) + " must be an object with \"x\", \"y\", \"width\" and \"depth\", got " +
+                         describe(j));
+        return std::nullopt;
+    }
+    Placement p;
+    bool ok = true;
+    for (const char* key : {"x", "y", "width", "depth"}) {
+        if (!j.contains(key)) {
+            r.error(ptr, std::string(what) + " has no \"" + key + "\"");
+            ok = false;
+            continue;
+        }
+        const bool length = std::string(key) == "width" || std::string(key) == "depth";
+        const std::string field = std::string(what) + " " + key;
+        const auto v = r.positive(j, key, ptr + "/" + key, field.c_str(),
+                                  length ? std::optional<double>(minLength) : std::optional<double>(0.0), maxLength);
+        if (!v) {
+            ok = false;
+            continue;
+        }
+        (key[0] == 'x' ? p.x : key[0] == 'y' ? p.y : key[0] == 'w' ? p.width : p.depth) = *v;
+    }
+    if (!ok) return std::nullopt;
+    const double tol = 1e-9 * std::max(fp.width, fp.depth);
+    if (p.x + p.width > fp.width + tol || p.y + p.depth > fp.depth + tol) {
+        r.error(ptr, std::string(what) + " reaches past the footprint (" + formatNumber(fp.width) + " × " +
+                         formatNumber(fp.depth) + "): it ends at x " + formatNumber(p.x + p.width) + ", y " +
+                         formatNumber(p.y + p.depth));
+        return std::nullopt;
+    }
+    return p;
+}
+
 void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& brief) {
     if (!j.is_object()) {
         r.error(ptr, "each room must be a JSON object, got " + describe(j));
@@ -166,9 +203,60 @@ void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& br
             }
         }
     }
-    room.unknownFields =
-        unknownOf(j, {"id", "name", "area", "minWidth", "maxAspect", "areaTolerance", "category", "facade"});
+    if (j.contains("fixed")) {
+        if (!brief.footprint)
+            r.error(ptr + "/fixed", "a fixed room needs a footprint to be placed in; give \"footprint\" a width and depth");
+        else if (auto p = readPlacement(r, j.at("fixed"), ptr + "/fixed", "fixed", *brief.footprint)) {
+            const double tol = 1e-6 * std::max(brief.footprint->width, brief.footprint->depth);
+            bool clear = true;
+            for (std::size_t k = 0; k < brief.footprint->cutouts.size() && clear; ++k)
+                if (overlaps(*p, brief.footprint->cutouts[k], tol)) {
+                    r.error(ptr + "/fixed", "room \"" + room.id + "\" is fixed over cut-out " + std::to_string(k + 1) +
+                                                " of the footprint, which is not building");
+                    clear = false;
+                }
+            for (const Room& other : brief.rooms)
+                if (clear && other.fixed && overlaps(*p, *other.fixed, tol)) {
+                    r.error(ptr + "/fixed", "room \"" + room.id + "\" is fixed where room \"" + other.id +
+                                                "\" is fixed; two rooms cannot share floor");
+                    clear = false;
+                }
+            if (clear) room.fixed = *p;
+        }
+    }
+    room.unknownFields = unknownOf(
+        j, {"id", "name", "area", "minWidth", "maxAspect", "areaTolerance", "category", "facade", "fixed"});
     brief.rooms.push_back(std::move(room));
+}
+
+void readCutouts(Reader& r, const OrderedJson& list, Footprint& fp) {
+    if (!list.is_array()) {
+        r.error("/footprint/cutouts", "cutouts must be a list of rectangles {\"x\", \"y\", \"width\", \"depth\"}");
+        return;
+    }
+    const double tol = 1e-6 * std::max(fp.width, fp.depth);
+    for (std::size_t k = 0; k < list.size(); ++k) {
+        const std::string ptr = "/footprint/cutouts/" + std::to_string(k);
+        auto c = readPlacement(r, list[k], ptr, "cut-out", fp);
+        if (!c) continue;
+        bool clear = true;
+        for (std::size_t i = 0; i < fp.cutouts.size() && clear; ++i)
+            if (overlaps(*c, fp.cutouts[i], tol)) {
+                r.error(ptr, "cut-out " + std::to_string(k + 1) + " overlaps cut-out " + std::to_string(i + 1) +
+                                 "; draw the part they share once");
+                clear = false;
+            }
+        if (!clear) continue;
+        fp.cutouts.push_back(*c);
+        if (fp.netArea() <= tol * tol) {
+            r.error(ptr, "the cut-outs leave nothing of the footprint to build on");
+            fp.cutouts.pop_back();
+        } else if (!isConnected(fp)) {
+            r.error(ptr, "cut-out " + std::to_string(k + 1) +
+                             " splits the footprint in two; a plan is one piece (make it smaller or move it to an edge)");
+            fp.cutouts.pop_back();
+        }
+    }
 }
 
 void readAdjacency(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& brief) {
@@ -233,9 +321,9 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
         } else {
             auto w = r.positive(f, "width", "/footprint/width", "footprint width", minLength, maxLength);
             auto d = r.positive(f, "depth", "/footprint/depth", "footprint depth", minLength, maxLength);
-            if (w && d) brief.footprint = Footprint{*w, *d};
-            // Fields of the footprint not planned yet (cut-outs) are kept for the round trip.
-            brief.footprintUnknownFields = unknownOf(f, {"width", "depth"});
+            if (w && d) brief.footprint = Footprint{*w, *d, {}};
+            if (w && d && f.contains("cutouts")) readCutouts(r, f.at("cutouts"), *brief.footprint);
+            brief.footprintUnknownFields = unknownOf(f, {"width", "depth", "cutouts"});
         }
     }
     if (doc.contains("surplus")) {
@@ -422,19 +510,37 @@ LoadResult loadProject(const std::string& path) {
     return parseProject(*text, path);
 }
 
+namespace {
+OrderedJson placementJson(const Placement& p) {
+    OrderedJson j = OrderedJson::object();
+    j["x"] = p.x;
+    j["y"] = p.y;
+    j["width"] = p.width;
+    j["depth"] = p.depth;
+    return j;
+}
+} // namespace
+
 std::string serializeProject(const Brief& brief) {
     OrderedJson doc = OrderedJson::object();
     doc["format"] = "abut.project";
     doc["version"] = projectFormatVersion;
     doc["units"] = brief.units;
-    if (brief.footprint)
+    if (brief.footprint) {
         doc["footprint"] = {{"width", brief.footprint->width}, {"depth", brief.footprint->depth}};
+        if (!brief.footprint->cutouts.empty()) {
+            OrderedJson list = OrderedJson::array();
+            for (const Placement& c : brief.footprint->cutouts) list.push_back(placementJson(c));
+            doc["footprint"]["cutouts"] = list;
+        }
         for (auto it = brief.footprintUnknownFields.json().begin(); it != brief.footprintUnknownFields.json().end(); ++it)
             doc["footprint"][it.key()] = it.value();
+    }
     doc["doorWidth"] = brief.doorWidth;
     if (brief.surplus == Surplus::Spread) doc["surplus"] = "spread"; // "spare" is the default
     OrderedJson rooms = OrderedJson::array();
     for (const Room& room : brief.rooms) {
+        if (room.cutout) continue; // plannedBrief's, written as footprint.cutouts
         OrderedJson j = OrderedJson::object();
         j["id"] = room.id;
         if (!room.name.empty()) j["name"] = room.name;
@@ -450,6 +556,7 @@ std::string serializeProject(const Brief& brief) {
                 if (room.facade.has(s)) f.push_back(std::string(1, sideLetter(s)));
             j["facade"] = f;
         }
+        if (room.fixed) j["fixed"] = placementJson(*room.fixed);
         for (auto it = room.unknownFields.json().begin(); it != room.unknownFields.json().end(); ++it)
             j[it.key()] = it.value();
         rooms.push_back(j);

@@ -104,6 +104,7 @@ struct PlanOptions {
 //   1000 per dropped 'must' adjacency (a door without a door-wide wall
 //        counts as dropped), so a plan that keeps every 'must' always ranks
 //        above one that does not
+//   1000 per room not exactly where it is fixed
 //   + 1 per requirement missed: a room off its area band, narrower than its
 //       minimum width, more elongated than its aspect limit, or missing a
 //       facade side it wishes for

@@ -75,11 +75,15 @@ void updateMetrics(const Brief& brief, const Footprint& fp, const ExtendedGraph&
     }
     std::sort(out.dropped.begin(), out.dropped.end());
     out.unmetFacade.clear();
+    // With cut-outs a facade is also a wall on a cut-out: measured on the rectangles.
+    const bool cutouts = std::any_of(brief.rooms.begin(), brief.rooms.end(), [](const Room& r) { return r.cutout; });
+    const double tol = 1e-9 * std::max(fp.width, fp.depth);
     for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
         const FacadeWish& wish = brief.rooms[i].facade;
         bool met = true, any = false;
         for (Side s : allSides) {
-            const bool touches = x.graph.hasEdge(static_cast<int>(i), x.pole(s));
+            const bool touches = cutouts ? facesOutside(brief, fp, out.rooms, static_cast<int>(i), s, tol)
+                                         : x.graph.hasEdge(static_cast<int>(i), x.pole(s));
             any = any || touches;
             if (wish.has(s)) met = met && touches;
         }
@@ -124,6 +128,7 @@ double variantScore(const Brief& brief, const Footprint& fp, const PlanVariant& 
     for (int d : v.dropped) score += brief.adjacencies[d].priority == Priority::Must ? 1000.0 : 0.2;
     const RequirementMisses& m = v.misses;
     score += 1.0 * (m.area + m.minWidth + m.maxAspect + m.facade);
+    score += 1000.0 * m.fixed; // a room away from where it is fixed weighs like a dropped 'must'
     for (std::size_t i = 0; i < v.rooms.size(); ++i) {
         const Rect& r = v.rooms[i];
         const double aspect = std::max(r.width(), r.depth()) / std::min(r.width(), r.depth());
@@ -400,6 +405,21 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
         plan.summary = stopped     ? "Stopped before any variant was found."
                        : outOfTime ? "The time limit ended the work before any variant was found."
                                    : aug.summary;
+        return plan;
+    }
+    // A variant with a room on a cut-out is no plan of this building.
+    const double tol = 1e-6 * std::max(plan.footprint.width, plan.footprint.depth);
+    const std::size_t before = plan.variants.size();
+    std::erase_if(plan.variants, [&](const PlanVariant& v) {
+        for (std::size_t i = 0; i < brief.rooms.size() && i < v.rooms.size(); ++i)
+            if (brief.rooms[i].cutout && !inPlace(brief.rooms[i], v.rooms[i], tol)) return true;
+        return false;
+    });
+    if (plan.variants.empty()) {
+        plan.status = stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
+        plan.summary = "No variant found keeps the footprint's cut-outs clear (" + std::to_string(before) +
+                       " tried): the rooms do not fit round them in the time given; try a longer time limit, or "
+                       "check the cut-outs against the rooms' minimum widths.";
         return plan;
     }
     rankVariants(brief, plan.footprint, plan.variants);

@@ -30,15 +30,26 @@ const char* sideName(Side s) {
 
 std::vector<UnmetItem> unmetRequirements(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
     std::vector<UnmetItem> out;
-    if (v.rooms.size() != brief.rooms.size()) return out;
-    const Brief planned = plannedBrief(brief); // targets as planned (grown with `surplus: spread`)
+    const Brief planned = plannedBrief(brief); // targets as planned (grown with `surplus: spread`), cut-outs added
+    if (v.rooms.size() != planned.rooms.size()) return out;
+    auto outside = [&](int j, Side s) {
+        return facesOutside(planned, fp, v.rooms, j, s, 1e-9 * std::max(fp.width, fp.depth));
+    };
     const std::string& u = brief.units;
     const std::string u2 = u + "\xC2\xB2";
-    for (int i = 0; i < static_cast<int>(brief.rooms.size()); ++i) {
+    for (int i = 0; i < static_cast<int>(planned.rooms.size()); ++i) {
         const Room& room = planned.rooms[i];
+        if (room.cutout) continue;
         const Rect& r = v.rooms[i];
         const std::string at = "/rooms/" + std::to_string(i);
         const std::string& name = room.displayName();
+        if (!inPlace(room, r, 1e-6 * std::max(fp.width, fp.depth))) {
+            const double off = std::max({std::abs(r.x0 - room.fixed->x), std::abs(r.y0 - room.fixed->y),
+                                         std::abs(r.x1 - room.fixed->x - room.fixed->width),
+                                         std::abs(r.y1 - room.fixed->y - room.fixed->depth)});
+            out.push_back({"fixed", at + "/fixed", {i}, -1, 0, off,
+                           name + ": not where it is fixed (a wall " + number(off, 2) + " " + u + " away)", {}});
+        }
         const double area = r.area(), dev = (area - room.area) / room.area;
         if (std::abs(dev) > room.tolerance() + 1e-9)
             out.push_back({"area", at + "/area", {i}, -1, room.area, area,
@@ -62,11 +73,11 @@ std::vector<UnmetItem> unmetRequirements(const Brief& brief, const Footprint& fp
             std::string missed;
             if (room.facade.anySide) {
                 bool any = false;
-                for (Side s : allSides) any = any || reachesSide(r, s, fp.width, fp.depth, tol);
+                for (Side s : allSides) any = any || outside(i, s);
                 if (!any) missed = "an outside wall";
             }
             for (Side s : allSides)
-                if (room.facade.has(s) && !reachesSide(r, s, fp.width, fp.depth, tol))
+                if (room.facade.has(s) && !outside(i, s))
                     missed += std::string(missed.empty() ? "the " : ", the ") + sideName(s) + " facade";
             if (!missed.empty()) {
                 UnmetItem item{"facade", at + "/facade", {i}, -1, 0, 0, name + ": does not reach " + missed, {}};
@@ -75,7 +86,7 @@ std::vector<UnmetItem> unmetRequirements(const Brief& brief, const Footprint& fp
                     int takers = 0;
                     for (int j = 0; j < static_cast<int>(v.rooms.size()); ++j)
                         for (Side s : allSides)
-                            if (j != i && reachesSide(v.rooms[j], s, fp.width, fp.depth, tol)) {
+                            if (j != i && !planned.rooms[j].cutout && outside(j, s)) {
                                 ++takers;
                                 break;
                             }
@@ -83,12 +94,12 @@ std::vector<UnmetItem> unmetRequirements(const Brief& brief, const Footprint& fp
                                           ") taken by " + std::to_string(takers) + " other rooms");
                 }
                 for (Side s : allSides) {
-                    if (!room.facade.has(s) || reachesSide(r, s, fp.width, fp.depth, tol)) continue;
+                    if (!room.facade.has(s) || outside(i, s)) continue;
                     const bool ew = s == Side::E || s == Side::W;
                     const double length = ew ? fp.depth : fp.width;
                     std::vector<std::pair<double, int>> takers;
                     for (int j = 0; j < static_cast<int>(v.rooms.size()); ++j)
-                        if (j != i && reachesSide(v.rooms[j], s, fp.width, fp.depth, tol))
+                        if (j != i && !planned.rooms[j].cutout && reachesSide(v.rooms[j], s, fp.width, fp.depth, tol))
                             takers.push_back({-(ew ? v.rooms[j].depth() : v.rooms[j].width()), j});
                     std::sort(takers.begin(), takers.end());
                     std::string list;

@@ -16,7 +16,7 @@
 namespace abut {
 
 struct UnmetItem {
-    std::string requirement; // "area", "minWidth", "maxAspect", "facade", "door" (a 'must' door), "adjacency" (a 'must' wall)
+    std::string requirement; // "area", "minWidth", "maxAspect", "facade", "door" (a 'must' door), "adjacency" (a 'must' wall), "fixed" (not where it is fixed)
     std::string field;       // the brief field it concerns, as a JSON Pointer (e.g. /rooms/3/area)
     std::vector<int> rooms;  // brief room indices
     int adjacency = -1;      // brief adjacency index ("adjacency")

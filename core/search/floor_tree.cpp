@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: MIT
 #include "search/floor_tree.h"
 
+#include <limits>
+
 #include <algorithm>
 #include <cmath>
 
@@ -97,7 +99,7 @@ PinwheelWalls pinwheelWalls(double w, double h, const std::array<double, 5>& are
 }
 
 void FloorTree::layout(const std::vector<double>& area, const Rect& outer, std::vector<Rect>& blockRects,
-                       Scratch& sc) const {
+                       Scratch& sc, const std::vector<std::optional<Rect>>* pins) const {
     blockRects.resize(leafOf_.size());
     const int top = root_;
     sc.order.clear();
@@ -119,6 +121,42 @@ void FloorTree::layout(const std::vector<double>& area, const Rect& outer, std::
             sc.area[v] = a;
         }
     }
+    // Pinned sides, bottom-up: a side of a node is pinned when a pinned block
+    // lies along it (N, E, S, W = 0..3).
+    const bool pinning = pins && !pins->empty();
+    if (pinning) {
+        constexpr double none = std::numeric_limits<double>::quiet_NaN();
+        sc.pinned.resize(nodes_.size());
+        auto take = [](double& side, double value) {
+            if (std::isnan(side)) side = value;
+        };
+        for (std::size_t i = sc.order.size(); i-- > 0;) {
+            const int v = sc.order[i];
+            const Node& n = nodes_[v];
+            std::array<double, 4>& out = sc.pinned[v];
+            out = {none, none, none, none};
+            if (n.kind == Kind::Leaf) {
+                if (const std::optional<Rect>& f = (*pins)[n.block]) out = {f->y1, f->x1, f->y0, f->x0};
+                continue;
+            }
+            // Children on each side: per side, the children whose side lies on it.
+            static constexpr int cutV[4][2] = {{0, 1}, {1, 1}, {0, 1}, {0, 0}}; // vertical: W child 0, E child 1
+            static constexpr int cutH[4][2] = {{1, 1}, {0, 1}, {0, 0}, {0, 1}}; // horizontal: S child 0, N child 1
+            static constexpr int wheel[4][2] = {{0, 1}, {1, 2}, {2, 3}, {3, 0}}; // NW, NE, SE, SW arms
+            for (int side = 0; side < 4; ++side) {
+                int s = side;
+                if (n.kind == Kind::Wheel && n.flag && (side == 1 || side == 3)) s = 4 - side; // mirrored E ↔ W
+                const int* kids = n.kind == Kind::Wheel ? wheel[s] : n.flag ? cutV[side] : cutH[side];
+                for (int k = 0; k < 2; ++k) take(out[side], sc.pinned[n.child[kids[k]]][side]);
+            }
+        }
+    }
+    auto cutAt = [&](double proportional, double lo, double hi, double fromFirst, double fromSecond) {
+        const double want = !std::isnan(fromFirst) ? fromFirst : fromSecond;
+        if (std::isnan(want)) return proportional;
+        const double margin = 0.05 * (hi - lo);
+        return std::clamp(want, lo + margin, hi - margin);
+    };
     sc.rect[top] = outer;
     for (int v : sc.order) {
         const Node& n = nodes_[v];
@@ -128,11 +166,13 @@ void FloorTree::layout(const std::vector<double>& area, const Rect& outer, std::
         } else if (n.kind == Kind::Cut) {
             const double f = sc.area[n.child[0]] / sc.area[v];
             if (n.flag) {
-                const double x = r.x0 + f * (r.x1 - r.x0);
+                double x = r.x0 + f * (r.x1 - r.x0);
+                if (pinning) x = cutAt(x, r.x0, r.x1, sc.pinned[n.child[0]][1], sc.pinned[n.child[1]][3]);
                 sc.rect[n.child[0]] = {r.x0, r.y0, x, r.y1};
                 sc.rect[n.child[1]] = {x, r.y0, r.x1, r.y1};
             } else {
-                const double y = r.y0 + f * (r.y1 - r.y0);
+                double y = r.y0 + f * (r.y1 - r.y0);
+                if (pinning) y = cutAt(y, r.y0, r.y1, sc.pinned[n.child[0]][0], sc.pinned[n.child[1]][2]);
                 sc.rect[n.child[0]] = {r.x0, r.y0, r.x1, y};
                 sc.rect[n.child[1]] = {r.x0, y, r.x1, r.y1};
             }

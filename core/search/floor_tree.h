@@ -22,6 +22,7 @@
 
 #include <array>
 #include <cstdint>
+#include <optional>
 #include <random>
 #include <vector>
 
@@ -64,13 +65,18 @@ public:
 
     // Rectangles of every block, areas exactly in proportion to `area` (per
     // block), filling `outer`. `scratch` is reused between calls.
+    // With `pins` (per block, empty: none), a cut that a pinned block's side
+    // lies on goes where that side is pinned (within the parent's middle
+    // 90 %) instead of where the areas put it: blocks are then in place
+    // whenever the tree lets them be, and areas are no longer exact.
     struct Scratch {
         std::vector<int> order;
         std::vector<double> area;
         std::vector<Rect> rect;
+        std::vector<std::array<double, 4>> pinned; // per node: pinned coordinate of its N, E, S, W side (NaN: none)
     };
     void layout(const std::vector<double>& area, const Rect& outer, std::vector<Rect>& blockRects,
-                Scratch& scratch) const;
+                Scratch& scratch, const std::vector<std::optional<Rect>>* pins = nullptr) const;
 
 
     // Moves. Each returns false (and changes nothing) when it does not apply.

@@ -21,17 +21,29 @@
 namespace abut {
 
 BlockAreas blockAreas(const Brief& brief, const Footprint& fp) {
+    // Rooms fixed in place (and cut-outs) take exactly their rectangles; the
+    // others share the rest.
     BlockAreas out;
-    const double F = fp.width * fp.depth;
+    double F = fp.width * fp.depth;
     double total = 0, band = 0;
     for (const Room& r : brief.rooms) {
+        if (r.fixed) {
+            F -= r.fixed->area();
+            continue;
+        }
         total += r.area;
         band += r.area * r.tolerance();
     }
+    auto each = [&](auto&& area) {
+        for (const Room& r : brief.rooms) out.room.push_back(r.fixed ? r.fixed->area() : area(r));
+    };
     out.room.reserve(brief.rooms.size());
-    if (total <= 0) return out;
+    if (total <= 0 || F <= 0) {
+        each([](const Room& r) { return r.area; });
+        return out;
+    }
     if (total >= F * (1 - 1e-9)) { // no surplus: every room shrinks alike
-        for (const Room& r : brief.rooms) out.room.push_back(r.area * F / total);
+        each([&](const Room& r) { return r.area * F / total; });
         return out;
     }
     // A surplus: the rooms take it within 90 % of their bands (the rest of the
@@ -39,14 +51,14 @@ BlockAreas blockAreas(const Brief& brief, const Footprint& fp) {
     // it fits in the last tenth of the bands.
     const double surplus = F - total;
     const double share = band > 0 ? std::min(1.0, surplus / (0.9 * band)) : 0.0;
+    each([&](const Room& r) { return r.area * (1 + 0.9 * share * r.tolerance()); });
     double taken = 0;
-    for (const Room& r : brief.rooms) {
-        out.room.push_back(r.area * (1 + 0.9 * share * r.tolerance()));
-        taken += out.room.back();
-    }
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i)
+        if (!brief.rooms[i].fixed) taken += out.room[i];
     const double left = F - taken;
     if (left <= 0.1 * band + 1e-12 * F) {
-        for (double& a : out.room) a *= F / taken;
+        for (std::size_t i = 0; i < brief.rooms.size(); ++i)
+            if (!brief.rooms[i].fixed) out.room[i] *= F / taken;
     } else {
         out.spare = left;
     }
@@ -71,6 +83,9 @@ struct Problem {
         double maxAspect = 0;  // 0: none
         bool circulation = false;
         bool spare = false;
+        bool cutout = false;     // not building: a wall on it is an exterior wall
+        double tolerance = 0.05; // area band (fraction)
+        std::optional<Rect> pin; // where the block is fixed
         FacadeWish facade;
     };
     struct Link {
@@ -84,6 +99,8 @@ struct Problem {
     std::vector<std::vector<int>> linksOf; // per block
     std::vector<int> mustDegree;           // per block: 'must' links
     std::vector<double> area;              // per block
+    std::vector<int> pinned, cutouts;      // blocks fixed in place; those of them that are cut-outs
+    std::vector<std::optional<Rect>> pins; // per block when any is pinned (FloorTree::layout), else empty
     Footprint fp;
     double scale = 1; // √(footprint area)
     int rooms = 0;
@@ -105,6 +122,13 @@ Problem makeProblem(const Brief& brief, const Footprint& fp, const SearchOptions
         std::transform(cat.begin(), cat.end(), cat.begin(), [](unsigned char c) { return std::tolower(c); });
         b.circulation = cat == "circulation";
         b.facade = r.facade;
+        b.cutout = r.cutout;
+        b.tolerance = r.tolerance();
+        if (r.fixed) {
+            b.pin = toRect(*r.fixed);
+            p.pinned.push_back(static_cast<int>(i));
+            if (r.cutout) p.cutouts.push_back(static_cast<int>(i));
+        }
         p.blocks.push_back(b);
     }
     if (areas.spare > 0) {
@@ -115,6 +139,8 @@ Problem makeProblem(const Brief& brief, const Footprint& fp, const SearchOptions
         p.blocks.push_back(b);
     }
     for (const Problem::Block& b : p.blocks) p.area.push_back(b.area);
+    if (!p.pinned.empty())
+        for (const Problem::Block& b : p.blocks) p.pins.push_back(b.pin);
     p.linksOf.resize(p.blocks.size());
     p.mustDegree.assign(p.blocks.size(), 0);
     for (const Adjacency& a : brief.adjacencies) {
@@ -159,10 +185,47 @@ double sideDistance(const Rect& r, Side s, const Footprint& fp) {
 // The search's measure of a layout (lower is better; 0 meets everything),
 // as a sum of terms per block and per link so that a part of the plan can
 // be measured alone.
-void blockTerm(const Problem& p, int i, const Rect& r, Evaluation& e, std::vector<Violation>* out) {
+// How far `r` is from an exterior wall facing `s`: the footprint's side, or a
+// cut-out beyond it on that side (overlapping it across).
+double exteriorDistance(const Problem& p, const std::vector<Rect>& rect, const Rect& r, Side s) {
+    double d = sideDistance(r, s, p.fp);
+    const double tol = 1e-9 * p.scale;
+    for (int k : p.cutouts) {
+        const Rect& c = rect[k];
+        const bool acrossX = std::min(r.x1, c.x1) - std::max(r.x0, c.x0) > tol;
+        const bool acrossY = std::min(r.y1, c.y1) - std::max(r.y0, c.y0) > tol;
+        switch (s) {
+        case Side::N: if (acrossX && c.y0 >= r.y1 - tol) d = std::min(d, c.y0 - r.y1); break;
+        case Side::S: if (acrossX && c.y1 <= r.y0 + tol) d = std::min(d, r.y0 - c.y1); break;
+        case Side::E: if (acrossY && c.x0 >= r.x1 - tol) d = std::min(d, c.x0 - r.x1); break;
+        case Side::W: if (acrossY && c.x1 <= r.x0 + tol) d = std::min(d, r.x0 - c.x1); break;
+        }
+    }
+    return d;
+}
+
+void blockTerm(const Problem& p, int i, const std::vector<Rect>& rect, Evaluation& e, std::vector<Violation>* out) {
     const Problem::Block& b = p.blocks[i];
+    const Rect& r = rect[i];
     const double L = p.scale;
     const double tol = 1e-9 * L;
+    if (b.pin) {
+        // Fixed in place: the search's layouts have exact areas, so the block
+        // is pulled towards its place; the sizing then holds it exactly.
+        const Rect& f = *b.pin;
+        const double d = (std::abs(r.x0 - f.x0) + std::abs(r.x1 - f.x1) + std::abs(r.y0 - f.y0) +
+                          std::abs(r.y1 - f.y1)) / L;
+        e.cost += 6.0 * d + (d > 0.02 ? 0.5 : 0.0);
+        if (d > 0.08) ++e.hard;
+    }
+    if (b.cutout) return;
+    if (!p.pins.empty() && !b.spare) {
+        // Layouts that hold blocks in place bend the areas: off the area the
+        // search aims at costs, far off counts as a miss.
+        const double off = std::abs(std::log(r.area() / p.area[i]));
+        if (off > 0.5 * b.tolerance) e.cost += 3.0 * (off - 0.5 * b.tolerance);
+        if (off > 2.0 * b.tolerance + 0.02) ++e.hard;
+    }
     const double w = r.width(), h = r.depth();
     const double shortSide = std::min(w, h), longSide = std::max(w, h);
     const double aspect = longSide / std::max(shortSide, 1e-12);
@@ -187,7 +250,7 @@ void blockTerm(const Problem& p, int i, const Rect& r, Evaluation& e, std::vecto
         double nearest = 1e300;
         bool missed = false;
         for (Side s : allSides) {
-            const double d = std::max(0.0, sideDistance(r, s, p.fp));
+            const double d = std::max(0.0, exteriorDistance(p, rect, r, s));
             nearest = std::min(nearest, d);
             if (b.facade.has(s) && d > tol) {
                 e.cost += 1.0 + 2.0 * d / L;
@@ -225,7 +288,7 @@ void linkTerm(const Problem& p, const Problem::Link& l, const std::vector<Rect>&
 Evaluation evaluate(const Problem& p, const std::vector<Rect>& rect, std::vector<Violation>* out) {
     Evaluation e;
     if (out) out->clear();
-    for (int i = 0; i < static_cast<int>(p.blocks.size()); ++i) blockTerm(p, i, rect[i], e, out);
+    for (int i = 0; i < static_cast<int>(p.blocks.size()); ++i) blockTerm(p, i, rect, e, out);
     for (const Problem::Link& l : p.links) linkTerm(p, l, rect, e, out);
     return e;
 }
@@ -244,14 +307,22 @@ std::vector<Point> roughPositions(const Problem& p, const Brief& brief, bool use
     std::uniform_real_distribution<double> unit(0.0, 1.0);
     std::normal_distribution<double> gauss(0.0, 1.0);
     bool sketched = useSketch && p.rooms > 0;
-    for (int i = 0; i < p.rooms && sketched; ++i) sketched = brief.sketchPosition(brief.rooms[i].id) != nullptr;
+    for (int i = 0; i < p.rooms && sketched; ++i)
+        sketched = brief.rooms[i].cutout || brief.sketchPosition(brief.rooms[i].id) != nullptr;
+    // Blocks fixed in place sit at their centres throughout.
+    auto holdPins = [&]() {
+        for (int i : p.pinned) pos[i] = {0.5 * (p.blocks[i].pin->x0 + p.blocks[i].pin->x1),
+                                         0.5 * (p.blocks[i].pin->y0 + p.blocks[i].pin->y1)};
+    };
     if (sketched) {
         double x0 = 1e300, x1 = -1e300, y0 = 1e300, y1 = -1e300;
         for (int i = 0; i < p.rooms; ++i) {
+            if (brief.rooms[i].cutout) continue;
             const SketchPoint* s = brief.sketchPosition(brief.rooms[i].id);
             x0 = std::min(x0, s->x), x1 = std::max(x1, s->x), y0 = std::min(y0, s->y), y1 = std::max(y1, s->y);
         }
         for (int i = 0; i < p.rooms; ++i) {
+            if (brief.rooms[i].cutout) continue;
             const SketchPoint* s = brief.sketchPosition(brief.rooms[i].id);
             pos[i].x = x1 > x0 ? W * (0.1 + 0.8 * (s->x - x0) / (x1 - x0)) : 0.5 * W;
             pos[i].y = y1 > y0 ? D * (0.1 + 0.8 * (s->y - y0) / (y1 - y0)) : 0.5 * D;
@@ -259,6 +330,7 @@ std::vector<Point> roughPositions(const Problem& p, const Brief& brief, bool use
         for (int i = p.rooms; i < B; ++i) pos[i] = {unit(rng) * W, unit(rng) * D};
     } else {
         for (Point& q : pos) q = {unit(rng) * W, unit(rng) * D};
+        holdPins();
         std::vector<double> radius(B);
         for (int i = 0; i < B; ++i) radius[i] = 0.5 * std::sqrt(p.blocks[i].area);
         const int steps = 250;
@@ -297,6 +369,7 @@ std::vector<Point> roughPositions(const Problem& p, const Brief& brief, bool use
                 pos[i].x = std::clamp(pos[i].x + k * f[i].x, 0.0, W);
                 pos[i].y = std::clamp(pos[i].y + k * f[i].y, 0.0, D);
             }
+            holdPins();
         }
     }
     if (jitter > 0)
@@ -305,6 +378,7 @@ std::vector<Point> roughPositions(const Problem& p, const Brief& brief, bool use
             pos[i].x = std::clamp(pos[i].x + r * gauss(rng), 0.0, W);
             pos[i].y = std::clamp(pos[i].y + r * gauss(rng), 0.0, D);
         }
+    holdPins();
     return pos;
 }
 
@@ -315,8 +389,8 @@ std::vector<Point> roughPositions(const Problem& p, const Brief& brief, bool use
 // its rooms). `make(item, rect)` gives the node of an item once its
 // rectangle is known.
 int cutOver(FloorTree& tree, const std::vector<double>& area, const std::vector<Point>& pos,
-            const std::vector<Point>& half, const Rect& outer, double scale, std::mt19937& rng, double noise,
-            const std::function<int(int, const Rect&)>& make) {
+            const std::vector<Point>& half, const std::vector<std::optional<Rect>>& pin, const Rect& outer,
+            double scale, std::mt19937& rng, double noise, const std::function<int(int, const Rect&)>& make) {
     struct Task {
         std::vector<int> items;
         Rect r;
@@ -359,6 +433,9 @@ int cutOver(FloorTree& tree, const std::vector<double>& area, const std::vector<
                     const double reach = dir ? half[items[j]].x : half[items[j]].y;
                     wrong += j < k ? std::max(0.0, at - c) : std::max(0.0, c - at);
                     through += std::max(0.0, reach - std::abs(at - c));
+                    if (const std::optional<Rect>& f = pin[items[j]]) // held in place: the cut keeps off it
+                        wrong += 4.0 * (j < k ? std::max(0.0, (dir ? f->x1 : f->y1) - c)
+                                              : std::max(0.0, c - (dir ? f->x0 : f->y0)));
                 }
                 double shape = 0;
                 const double a = len * prefix / total, b = len - a;
@@ -435,7 +512,9 @@ FloorTree cutTree(const Problem& p, const std::vector<Point>& pos, std::mt19937&
     const int B = static_cast<int>(p.blocks.size());
     FloorTree tree(B);
     if (B == 1) return tree;
-    const int root = cutOver(tree, p.area, pos, reaches(p, pos), {0, 0, p.fp.width, p.fp.depth}, p.scale, rng, noise,
+    std::vector<std::optional<Rect>> pin;
+    for (const Problem::Block& b : p.blocks) pin.push_back(b.pin);
+    const int root = cutOver(tree, p.area, pos, reaches(p, pos), pin, {0, 0, p.fp.width, p.fp.depth}, p.scale, rng, noise,
                              [&](int block, const Rect&) { return tree.leafOf(block); });
     tree.setRoot(root);
     return tree;
@@ -574,7 +653,9 @@ FloorTree zoneTree(const Problem& p, const std::vector<Zone>& zones, const std::
             zoneOfItem.push_back(-1);
             blockOfItem.push_back(i);
         }
-    const int root = cutOver(tree, area, at, half, {0, 0, p.fp.width, p.fp.depth}, p.scale, rng, noise,
+    std::vector<std::optional<Rect>> pin;
+    for (int b : blockOfItem) pin.push_back(b >= 0 ? p.blocks[b].pin : std::nullopt);
+    const int root = cutOver(tree, area, at, half, pin, {0, 0, p.fp.width, p.fp.depth}, p.scale, rng, noise,
                              [&](int item, const Rect& r) {
                                  return zoneOfItem[item] >= 0 ? zoneStrip(tree, zones[zoneOfItem[item]], pos, p.area, r, rng)
                                                               : tree.leafOf(blockOfItem[item]);
@@ -602,7 +683,7 @@ public:
             ++moves_;
             trial_ = cur_;
             if (!propose(trial_)) continue;
-            trial_.layout(p_.area, outer(), trialRects_, scratch_);
+            trial_.layout(p_.area, outer(), trialRects_, scratch_, &p_.pins);
             const Evaluation e = evaluate(p_, trialRects_, &trialViolations_);
             const double delta = e.cost - curEval_.cost;
             if (delta <= 0 || unit_(rng_) < std::exp(-delta / temperature)) {
@@ -674,7 +755,7 @@ private:
                     const std::vector<Zone> zones = circulationZones(p_, rng_);
                     const bool zoned = !zones.empty() && k % 2 == 1;
                     FloorTree seed = zoned ? zoneTree(p_, zones, pos, rng_, 1.0) : cutTree(p_, pos, rng_, 1.0);
-                    seed.layout(p_.area, outer(), trialRects_, scratch_);
+                    seed.layout(p_.area, outer(), trialRects_, scratch_, &p_.pins);
                     const Evaluation e = evaluate(p_, trialRects_, nullptr);
                     if (e.hard < bestHard || (e.hard == bestHard && e.cost < bestCost)) {
                         bestHard = e.hard;
@@ -686,7 +767,7 @@ private:
             t0_ = 0.6;
         }
         t1_ = 0.01;
-        cur_.layout(p_.area, outer(), curRects_, scratch_);
+        cur_.layout(p_.area, outer(), curRects_, scratch_, &p_.pins);
         curEval_ = evaluate(p_, curRects_, &curViolations_);
         if (first || better(curEval_, bestEval_)) {
             best_ = cur_;
@@ -910,7 +991,8 @@ std::vector<SearchPlan> sizeArrangement(const Brief& brief, const Footprint& fp,
         out.push_back(arrangement);
         out.back().sized = std::move(sized);
     };
-    if (problem.meetsMinimums(start)) { // nothing has to move
+    const bool anyFixed = std::any_of(brief.rooms.begin(), brief.rooms.end(), [](const Room& r) { return r.fixed.has_value(); });
+    if (problem.meetsMinimums(start) && !anyFixed) { // nothing has to move
         add(start);
         return out;
     }
@@ -1043,7 +1125,9 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
 
     const int threads = options.threads > 0 ? options.threads
                                             : std::max(1, static_cast<int>(std::thread::hardware_concurrency()));
-    const long long budget = options.moves > 0 ? options.moves : 200000LL + 60000LL * p.rooms;
+    // Blocks held in place narrow the plans that fit: four times the moves.
+    const long long budget = options.moves > 0 ? options.moves
+                                               : (200000LL + 60000LL * p.rooms) * (p.pinned.empty() ? 1 : 4);
     // Rounds of about 20–40 ms; epochs (one temperature sweep each) long
     // enough for a sweep to settle.
     const long long round = std::clamp<long long>(400000 / std::max(1, B), 500, 20000);

@@ -24,6 +24,32 @@ bool reachesSide(const Rect& r, Side s, double width, double depth, double tol) 
     return false;
 }
 
+Rect toRect(const Placement& p) { return {p.x, p.y, p.x + p.width, p.y + p.depth}; }
+
+bool inPlace(const Room& room, const Rect& r, double tol) {
+    if (!room.fixed) return true;
+    const Rect f = toRect(*room.fixed);
+    return std::abs(r.x0 - f.x0) <= tol && std::abs(r.x1 - f.x1) <= tol && std::abs(r.y0 - f.y0) <= tol &&
+           std::abs(r.y1 - f.y1) <= tol;
+}
+
+bool facesOutside(const Brief& brief, const Footprint& fp, const std::vector<Rect>& rooms, int i, Side s,
+                  double tol) {
+    const Rect& r = rooms[i];
+    if (reachesSide(r, s, fp.width, fp.depth, tol)) return true;
+    for (std::size_t k = 0; k < brief.rooms.size() && k < rooms.size(); ++k) {
+        if (!brief.rooms[k].cutout || sharedWallLength(r, rooms[k], tol) <= tol) continue;
+        const Rect& c = rooms[k];
+        switch (s) {
+        case Side::N: if (std::abs(c.y0 - r.y1) <= tol) return true; break;
+        case Side::E: if (std::abs(c.x0 - r.x1) <= tol) return true; break;
+        case Side::S: if (std::abs(c.y1 - r.y0) <= tol) return true; break;
+        case Side::W: if (std::abs(c.x1 - r.x0) <= tol) return true; break;
+        }
+    }
+    return false;
+}
+
 RequirementMisses requirementMisses(const Brief& brief, const Footprint& fp, const std::vector<Rect>& rooms,
                                     double anyWall) {
     RequirementMisses m;
@@ -31,6 +57,8 @@ RequirementMisses requirementMisses(const Brief& brief, const Footprint& fp, con
     for (std::size_t i = 0; i < brief.rooms.size() && i < rooms.size(); ++i) {
         const Room& room = brief.rooms[i];
         const Rect& r = rooms[i];
+        if (!inPlace(room, r, 1e-6 * std::max(fp.width, fp.depth))) ++m.fixed;
+        if (room.cutout) continue;
         const double err = std::abs(r.area() - room.area) / room.area;
         m.worstAreaError = std::max(m.worstAreaError, err);
         if (err > room.tolerance() + 1e-9) ++m.area;
@@ -39,7 +67,7 @@ RequirementMisses requirementMisses(const Brief& brief, const Footprint& fp, con
         if (room.maxAspect && longSide > *room.maxAspect * shortSide * (1 + 1e-9)) ++m.maxAspect;
         bool any = false, met = true;
         for (Side s : allSides) {
-            const bool reaches = reachesSide(r, s, fp.width, fp.depth, tol);
+            const bool reaches = facesOutside(brief, fp, rooms, static_cast<int>(i), s, tol);
             any = any || reaches;
             if (room.facade.has(s) && !reaches) met = false;
         }

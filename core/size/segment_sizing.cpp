@@ -2,10 +2,12 @@
 #include "size/segment_sizing.h"
 
 #include <cstdio>
+#include <cstdlib>
 #include <Eigen/Sparse>
 #include <Eigen/SparseCholesky>
 
 #include <algorithm>
+#include <functional>
 #include <cmath>
 #include <limits>
 #include <set>
@@ -134,6 +136,25 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
             if (!(slack(g) > 0)) return false;
         return true;
     };
+    // Pushes the two ends of each gap that is too small apart (a fixed end
+    // stays), sweep after sweep, so only what must move moves. Returns
+    // whether every gap is then strictly met.
+    auto nearestFix = [&](const std::function<bool(bool, int)>& fixed) {
+        for (int sweep = 0; sweep < 400; ++sweep) {
+            if (strictlyFeasible()) return true;
+            for (const Gap& g : gap) {
+                const double want = g.min * 1.001 + 1e-9 * std::max(W, D);
+                const double deficit = want - (c.at(g.vertical, g.to) - c.at(g.vertical, g.from));
+                if (deficit <= 0) continue;
+                const bool fromFixed = fixed(g.vertical, g.from), toFixed = fixed(g.vertical, g.to);
+                if (fromFixed && toFixed) continue;
+                const double share = fromFixed || toFixed ? 1.0 : 0.5;
+                if (!toFixed) c.at(g.vertical, g.to) += share * deficit;
+                if (!fromFixed) c.at(g.vertical, g.from) -= share * deficit;
+            }
+        }
+        return strictlyFeasible();
+    };
     bool warm = false;
     // Natural extent of each gap for the starting layout: a room's side of a
     // square of its target (cold), or what `start` gives it when `start` is a
@@ -149,24 +170,9 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
         if (!warm) {
             for (std::size_t i = 0; i < gap.size(); ++i)
                 natural[i] = std::max(0.0, c.at(gap[i].vertical, gap[i].to) - c.at(gap[i].vertical, gap[i].from));
-            // First the nearest fix: push the two ends of each gap that is
-            // too small apart (a fixed end stays), sweep after sweep, so only
-            // what must move moves.
+            // First the nearest fix.
             const Coordinates saved = c;
-            auto fixed = [&](bool axisX, int seg) { return (axisX ? varX[seg] : varY[seg]) < 0; };
-            for (int sweep = 0; sweep < 400 && !warm; ++sweep) {
-                for (const Gap& g : gap) {
-                    const double want = g.min * 1.001 + 1e-9 * std::max(W, D);
-                    const double deficit = want - (c.at(g.vertical, g.to) - c.at(g.vertical, g.from));
-                    if (deficit <= 0) continue;
-                    const bool fromFixed = fixed(g.vertical, g.from), toFixed = fixed(g.vertical, g.to);
-                    if (fromFixed && toFixed) continue;
-                    const double share = fromFixed || toFixed ? 1.0 : 0.5;
-                    if (!toFixed) c.at(g.vertical, g.to) += share * deficit;
-                    if (!fromFixed) c.at(g.vertical, g.from) -= share * deficit;
-                }
-                warm = strictlyFeasible();
-            }
+            warm = nearestFix([&](bool axisX, int seg) { return (axisX ? varX[seg] : varY[seg]) < 0; });
             if (!warm) c = saved;
         }
     }
@@ -214,6 +220,48 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
     c.x[s.eastSegment] = W;
     c.y[s.southSegment] = 0;
     c.y[s.northSegment] = D;
+    // Rooms fixed in place (and cut-outs): their four sides go where they are
+    // fixed and stay; the other segments make way (nearest fix). When that
+    // cannot be done strictly, the layout is sized as it was and the room is
+    // reported away from its place.
+    {
+        std::vector<char> pinX(s.verticalCount, 0), pinY(s.horizontalCount, 0);
+        Coordinates pinned = c;
+        bool consistent = true, any = false;
+        auto pin = [&](bool axisX, int seg, double value) {
+            std::vector<char>& flag = axisX ? pinX : pinY;
+            if (flag[seg] && std::abs(pinned.at(axisX, seg) - value) > 1e-9 * std::max(W, D)) consistent = false;
+            flag[seg] = 1;
+            pinned.at(axisX, seg) = value;
+        };
+        for (int v = 0; v < static_cast<int>(brief_.rooms.size()) && v < x_.graph.vertexCount(); ++v) {
+            if (!x_.isRoom(v) || !brief_.rooms[v].fixed) continue;
+            const Placement& f = *brief_.rooms[v].fixed;
+            any = true;
+            pin(true, s.west[v], f.x);
+            pin(true, s.east[v], f.x + f.width);
+            pin(false, s.south[v], f.y);
+            pin(false, s.north[v], f.y + f.depth);
+        }
+        if (std::getenv("ABUT_DEBUG_PIN")) std::fprintf(stderr, "pin any %d consistent %d\n", any, consistent);
+        if (any && consistent) {
+            const Coordinates saved = c;
+            c = pinned;
+            const bool held = nearestFix([&](bool axisX, int seg) {
+                return (axisX ? lockX[seg] || pinX[seg] : lockY[seg] || pinY[seg]) != 0;
+            });
+            if (std::getenv("ABUT_DEBUG_PIN")) std::fprintf(stderr, "held %d\n", held);
+            if (held) {
+                for (int k = 0; k < s.verticalCount; ++k) lockX[k] = lockX[k] || pinX[k];
+                for (int k = 0; k < s.horizontalCount; ++k) lockY[k] = lockY[k] || pinY[k];
+            } else {
+                c = saved;
+            }
+        }
+    }
+    nv = 0;
+    for (int k = 0; k < s.verticalCount; ++k) varX[k] = lockX[k] ? -1 : nv++;
+    for (int k = 0; k < s.horizontalCount; ++k) varY[k] = lockY[k] ? -1 : nv++;
 
     // Residuals: (value, [(axisX, segment, derivative)]).
     const int n = x_.graph.vertexCount();

@@ -177,8 +177,8 @@ void TestProjectIo::unknownFieldsSurvive() {
     QCOMPARE(r.brief.adjacencies[0].unknownFields.json().at("note").get<std::string>(),
              std::string("glazed screen"));
     QCOMPARE(r.brief.unknownFields.json().at("client").at("reference").get<std::string>(), std::string("demo-7"));
-    // Footprint fields not planned yet (cut-outs, formats.md) are kept too.
-    QCOMPARE(r.brief.footprintUnknownFields.json().at("cutouts").size(), std::size_t(1));
+    // Cut-outs are read (formats.md), other footprint fields kept.
+    QCOMPARE(r.brief.footprint->cutouts.size(), std::size_t(1));
     QVERIFY(r.brief.rooms[0].facade.anySide);
     QVERIFY(r.brief.rooms[1].facade.has(Side::N) && r.brief.rooms[1].facade.has(Side::W));
 }

@@ -1,11 +1,13 @@
 # SPDX-License-Identifier: MIT
 """Acceptance of the plan search: briefs read off plausible building plans
-(plan_briefs.py; the drawn plan is the witness that an exact answer exists),
+(plan_briefs.py, or with --shaped shaped_briefs.py: L, U and courtyard
+footprints and fixed cores; the drawn plan is the witness that an exact
+answer exists),
 planned by `abut-cli plan`, the best variant judged with shapely
 (plan_quality.py): worst area deviation within 5 %, every minimum width,
 aspect limit, 'must' adjacency (doors with a door-wide wall) and facade wish.
 
-    check_quality.py CLI [--count 100] [--seed 1] [--time-limit 20]
+    check_quality.py CLI [--shaped] [--count 100] [--seed 1] [--time-limit 20]
                      [--need 0.9] [--baseline FILE] [--write-baseline FILE]
                      [--keep DIR] [--jobs 2]
 
@@ -27,6 +29,7 @@ import time
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
 import plan_briefs  # noqa: E402
 import plan_quality  # noqa: E402
+import shaped_briefs  # noqa: E402
 
 ap = argparse.ArgumentParser()
 ap.add_argument("cli")
@@ -38,6 +41,7 @@ ap.add_argument("--baseline")
 ap.add_argument("--write-baseline")
 ap.add_argument("--keep")
 ap.add_argument("--jobs", type=int, default=2)
+ap.add_argument("--shaped", action="store_true", help="briefs on L, U and courtyard footprints and with fixed cores")
 ap.add_argument("--legacy", action="store_true", help="the CLI has no --time-limit/--threads (baseline runs)")
 args = ap.parse_args()
 
@@ -66,7 +70,7 @@ def musts(miss):
     return sum(1 for m in miss if m.startswith("must "))
 
 
-briefs = plan_briefs.generate(args.count, args.seed)
+briefs = (shaped_briefs if args.shaped else plan_briefs).generate(args.count, args.seed)
 results = []
 with tempfile.TemporaryDirectory() as scratch:
     tmp = args.keep or scratch

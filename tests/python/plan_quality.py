@@ -4,7 +4,9 @@
 footprint; every room is within 5 % of its target area (a planner's usual
 band at the briefing stage: common practice, no source), at least its minimum
 width and at most its aspect limit; every 'must' adjacency is a shared wall
-(a door one at least doorWidth long); every facade wish is met."""
+(a door one at least doorWidth long); every facade wish is met (a wall on a
+cut-out of the footprint counts, facing the side it faces); every fixed room
+exactly where it is fixed; nothing on a cut-out."""
 from shapely.geometry import LineString, box
 from shapely.ops import unary_union
 
@@ -26,10 +28,26 @@ def shared(a, b):
     return max(0.0, near - 2e-6)
 
 
-def facade_length(r, side, w, d):
-    line = {"N": LineString([(0, d), (w, d)]), "S": LineString([(0, 0), (w, 0)]),
-            "E": LineString([(w, 0), (w, d)]), "W": LineString([(0, 0), (0, d)])}[side]
-    return box(*r).buffer(1e-6, join_style=2).intersection(line).length
+def facade_length(r, side, w, d, cutouts=()):
+    lines = [{"N": LineString([(0, d), (w, d)]), "S": LineString([(0, 0), (w, 0)]),
+              "E": LineString([(w, 0), (w, d)]), "W": LineString([(0, 0), (0, d)])}[side]]
+    for cx0, cy0, cx1, cy1 in cutouts:  # the cut-out's side that faces away from the room
+        lines.append({"N": LineString([(cx0, cy0), (cx1, cy0)]), "S": LineString([(cx0, cy1), (cx1, cy1)]),
+                      "E": LineString([(cx0, cy0), (cx0, cy1)]), "W": LineString([(cx1, cy0), (cx1, cy1)])}[side])
+    near = box(*r).buffer(1e-6, join_style=2)
+    # A cut-out's side counts only where the room lies beyond it, not beside it.
+    total = near.intersection(lines[0]).length
+    for (cx0, cy0, cx1, cy1), line in zip(cutouts, lines[1:]):
+        x0, y0, x1, y1 = r
+        beyond = {"N": y1 <= cy0 + 1e-6, "S": y0 >= cy1 - 1e-6, "E": x1 <= cx0 + 1e-6, "W": x0 >= cx1 - 1e-6}[side]
+        if beyond:
+            total += near.intersection(line).length
+    return total
+
+
+def cutout_rects(brief):
+    return [(c["x"], c["y"], c["x"] + c["width"], c["y"] + c["depth"])
+            for c in brief["footprint"].get("cutouts", [])]
 
 
 def misses(brief, rooms, spaces=(), band=AREA_BAND):
@@ -38,13 +56,17 @@ def misses(brief, rooms, spaces=(), band=AREA_BAND):
     out = []
     w, d = brief["footprint"]["width"], brief["footprint"]["depth"]
     door = brief.get("doorWidth", 0.9)
+    cuts = cutout_rects(brief)
+    net = box(0, 0, w, d)
+    for c in cuts:
+        net = net.difference(box(*c))
     rects = [box(*rooms[r["id"]]) for r in brief["rooms"]] + [box(*s) for s in spaces]
     union = unary_union(rects)
     total = sum(p.area for p in rects)
-    if abs(union.area - w * d) > 1e-4 * w * d or abs(total - w * d) > 1e-4 * w * d:
+    if abs(union.area - net.area) > 1e-4 * w * d or abs(total - net.area) > 1e-4 * w * d:
         out.append("the rooms do not tile the footprint")
-    if not box(0, 0, w, d).buffer(1e-6).contains(union):
-        out.append("a room leaves the footprint")
+    if not net.buffer(1e-6, join_style=2).contains(union):
+        out.append("a room leaves the footprint or stands on a cut-out")
     for r in brief["rooms"]:
         x0, y0, x1, y1 = rooms[r["id"]]
         a = (x1 - x0) * (y1 - y0)
@@ -57,7 +79,12 @@ def misses(brief, rooms, spaces=(), band=AREA_BAND):
         if r.get("maxAspect") and short > 0 and long_ / short > r["maxAspect"] + EPS:
             out.append(f"{r['id']}: aspect {long_ / short:.2f}, limit {r['maxAspect']}")
         wish = r.get("facade") or []
-        sides = {s: facade_length(rooms[r["id"]], s, w, d) for s in "NESW"}
+        sides = {s: facade_length(rooms[r["id"]], s, w, d, cuts) for s in "NESW"}
+        if r.get("fixed"):
+            f = r["fixed"]
+            want = (f["x"], f["y"], f["x"] + f["width"], f["y"] + f["depth"])
+            if max(abs(a - b) for a, b in zip(want, rooms[r["id"]])) > 1e-5:
+                out.append(f"{r['id']}: not where it is fixed")
         if "any" in wish and max(sides.values()) <= EPS:
             out.append(f"{r['id']}: no exterior wall")
         for s in wish:
