@@ -2,7 +2,6 @@
 #include "size/segment_sizing.h"
 
 #include <cstdio>
-#include <cstdlib>
 #include <Eigen/Sparse>
 #include <Eigen/SparseCholesky>
 
@@ -243,14 +242,12 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
             pin(false, s.south[v], f.y);
             pin(false, s.north[v], f.y + f.depth);
         }
-        if (std::getenv("ABUT_DEBUG_PIN")) std::fprintf(stderr, "pin any %d consistent %d\n", any, consistent);
         if (any && consistent) {
             const Coordinates saved = c;
             c = pinned;
             const bool held = nearestFix([&](bool axisX, int seg) {
                 return (axisX ? lockX[seg] || pinX[seg] : lockY[seg] || pinY[seg]) != 0;
             });
-            if (std::getenv("ABUT_DEBUG_PIN")) std::fprintf(stderr, "held %d\n", held);
             if (held) {
                 for (int k = 0; k < s.verticalCount; ++k) lockX[k] = lockX[k] || pinX[k];
                 for (int k = 0; k < s.horizontalCount; ++k) lockY[k] = lockY[k] || pinY[k];
