@@ -65,16 +65,35 @@ double paintPlan(QPainter& p, const QRectF& target, const Brief& brief, const Fo
         p.setBrush(QBrush(QColor(0xCC, 0xCC, 0xCC), Qt::BDiagPattern));
         p.drawRect(toDevice(r));
     }
+    // The rooms of the brief (a plan of the planned brief also holds its
+    // cut-outs, after the rooms: drawn as not building, hatched).
+    const std::size_t rooms = std::min(v.rooms.size(), brief.rooms.size());
+    for (const Placement& c : fp.cutouts) {
+        p.setPen(Qt::NoPen);
+        p.setBrush(QBrush(QColor(0x99, 0x99, 0x99), Qt::FDiagPattern));
+        p.drawRect(toDevice(Rect{c.x, c.y, c.x + c.width, c.y + c.depth}));
+    }
     p.setPen(QPen(QColor(0x22, 0x22, 0x22), line));
     p.setBrush(QColor(0xFA, 0xF7, 0xF0));
-    for (const Rect& r : v.rooms) p.drawRect(toDevice(r));
+    for (std::size_t i = 0; i < rooms; ++i)
+        if (!brief.rooms[i].cutout) p.drawRect(toDevice(v.rooms[i]));
+    // A room fixed in place: a second line inside its walls (shape, not colour).
     p.setBrush(Qt::NoBrush);
+    p.setPen(QPen(QColor(0x22, 0x22, 0x22), line * 0.8, Qt::DashDotLine));
+    for (std::size_t i = 0; i < rooms; ++i)
+        if (brief.rooms[i].fixed && !brief.rooms[i].cutout)
+            p.drawRect(toDevice(v.rooms[i]).adjusted(line * 3, line * 3, -line * 3, -line * 3));
     p.setPen(QPen(QColor::fromRgb(outlineRgb), line * 2.5));
-    p.drawRect(toDevice(Rect{0, 0, fp.width, fp.depth}));
+    for (const OutlineLoop& loop : footprintOutline(fp)) {
+        QPolygonF poly;
+        for (const auto& [x, y] : loop) poly << QPointF(origin.x() + x * s, origin.y() + (fp.depth - y) * s);
+        p.drawPolygon(poly);
+    }
     // Labels: name over area, sized to the room.
     p.setPen(QColor(0x11, 0x11, 0x11));
     const double metre = 1000.0 / mmPerUnit(brief.units); // plan units per metre
-    for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+    for (std::size_t i = 0; i < rooms; ++i) {
+        if (brief.rooms[i].cutout) continue;
         const QRectF box = toDevice(v.rooms[i]).adjusted(line * 2, line * 2, -line * 2, -line * 2);
         QString name = QString::fromStdString(brief.rooms[i].displayName());
         double px = std::max(minTextPx, std::min(box.height() / 3.2, 0.45 * metre * s));
@@ -245,7 +264,8 @@ bool paintSheet(QPagedPaintDevice& device, int dotsPerInch, const Brief& brief, 
         true);
     row({QStringLiteral("Spare spaces"), QString(), QString::number(sched.spareArea, 'f', 1), QString(), QString()}, false);
     row({QStringLiteral("Footprint"), QString(), QString::number(sched.footprintArea, 'f', 1), QString(),
-         QString::number(fp.width, 'f', 2) + QString::fromUtf8(" × ") + QString::number(fp.depth, 'f', 2)},
+         QString::number(fp.width, 'f', 2) + QString::fromUtf8(" × ") + QString::number(fp.depth, 'f', 2) +
+             (fp.cutouts.empty() ? QString() : QStringLiteral(" less cut-outs"))},
         true);
 
     y += rowH * 0.5;

@@ -2,6 +2,7 @@
 #include "brief/brief.h"
 
 #include <algorithm>
+#include <map>
 
 #include <nlohmann/json.hpp>
 
@@ -130,6 +131,72 @@ bool isConnected(const Footprint& fp) {
         }
     }
     return reached == count;
+}
+
+std::vector<OutlineLoop> footprintOutline(const Footprint& fp) {
+    std::vector<double> xs{0.0, fp.width}, ys{0.0, fp.depth};
+    for (const Placement& c : fp.cutouts) {
+        xs.insert(xs.end(), {c.x, c.x + c.width});
+        ys.insert(ys.end(), {c.y, c.y + c.depth});
+    }
+    for (auto* v : {&xs, &ys}) {
+        std::sort(v->begin(), v->end());
+        v->erase(std::unique(v->begin(), v->end()), v->end());
+    }
+    const int nx = static_cast<int>(xs.size()) - 1, ny = static_cast<int>(ys.size()) - 1;
+    auto building = [&](int i, int j) {
+        if (i < 0 || j < 0 || i >= nx || j >= ny) return false;
+        const Placement cell{xs[i], ys[j], xs[i + 1] - xs[i], ys[j + 1] - ys[j]};
+        for (const Placement& c : fp.cutouts)
+            if (overlapArea(cell, c) > 0.5 * cell.area()) return false;
+        return true;
+    };
+    // Boundary edges between grid points (i, j), building on their left.
+    std::map<std::pair<int, int>, std::vector<std::pair<int, int>>> next;
+    for (int i = 0; i < nx; ++i)
+        for (int j = 0; j < ny; ++j) {
+            if (!building(i, j)) continue;
+            if (!building(i, j - 1)) next[{i, j}].push_back({i + 1, j});         // south side, eastwards
+            if (!building(i + 1, j)) next[{i + 1, j}].push_back({i + 1, j + 1}); // east side, northwards
+            if (!building(i, j + 1)) next[{i + 1, j + 1}].push_back({i, j + 1}); // north side, westwards
+            if (!building(i - 1, j)) next[{i, j + 1}].push_back({i, j});         // west side, southwards
+        }
+    std::vector<OutlineLoop> loops;
+    while (!next.empty()) {
+        std::vector<std::pair<int, int>> walk{next.begin()->first};
+        for (;;) {
+            auto it = next.find(walk.back());
+            if (it == next.end()) break;
+            const std::pair<int, int> to = it->second.back();
+            it->second.pop_back();
+            if (it->second.empty()) next.erase(it);
+            if (to == walk.front()) break;
+            walk.push_back(to);
+        }
+        OutlineLoop loop;
+        const std::size_t k = walk.size();
+        for (std::size_t a = 0; a < k; ++a) { // corners only
+            const auto& p = walk[(a + k - 1) % k];
+            const auto& q = walk[a];
+            const auto& r = walk[(a + 1) % k];
+            const bool straight = (p.first == q.first && q.first == r.first) || (p.second == q.second && q.second == r.second);
+            if (!straight) loop.emplace_back(xs[q.first], ys[q.second]);
+        }
+        loops.push_back(std::move(loop));
+    }
+    // The outer loop (largest signed area, counter-clockwise) first.
+    auto signedArea = [](const OutlineLoop& l) {
+        double a = 0;
+        for (std::size_t i = 0; i < l.size(); ++i) {
+            const auto& p = l[i];
+            const auto& q = l[(i + 1) % l.size()];
+            a += p.first * q.second - q.first * p.second;
+        }
+        return a / 2;
+    };
+    std::stable_sort(loops.begin(), loops.end(),
+                     [&](const OutlineLoop& a, const OutlineLoop& b) { return signedArea(a) > signedArea(b); });
+    return loops;
 }
 
 Brief plannedBrief(const Brief& brief) {

@@ -130,6 +130,12 @@ bool overlaps(const Placement& a, const Placement& b, double tolerance);
 // corner only are two). O(c³) for c cut-outs.
 bool isConnected(const Footprint& fp);
 
+// The outline of the footprint minus its cut-outs, as closed loops of
+// corners: the outer loop counter-clockwise first, then one clockwise loop
+// per courtyard. Without cut-outs, the bounding rectangle. O(c²) cells.
+using OutlineLoop = std::vector<std::pair<double, double>>;
+std::vector<OutlineLoop> footprintOutline(const Footprint& fp);
+
 struct SketchPoint {
     double x = 0.0, y = 0.0;
     bool operator==(const SketchPoint&) const = default;

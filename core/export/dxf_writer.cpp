@@ -84,20 +84,22 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     Dxf e;
     const double textHeight = options.textHeight > 0 ? options.textHeight
                                                       : std::max(0.12, std::min(fp.width, fp.depth) / 60.0);
-    auto poly = [&](const Rect& r, const std::string& layer) {
+    auto loop = [&](const OutlineLoop& corners, const std::string& layer) {
         e.pair(0, "LWPOLYLINE");
         e.pair(5, d.handle());
         e.pair(330, hModel);
         e.pair(100, "AcDbEntity");
         e.pair(8, layer);
         e.pair(100, "AcDbPolyline");
-        e.pair(90, 4);
+        e.pair(90, static_cast<int>(corners.size()));
         e.pair(70, 1); // closed
-        const double xs[4] = {r.x0, r.x1, r.x1, r.x0}, ys[4] = {r.y0, r.y0, r.y1, r.y1};
-        for (int k = 0; k < 4; ++k) {
-            e.real(10, xs[k]);
-            e.real(20, ys[k]);
+        for (const auto& [x, y] : corners) {
+            e.real(10, x);
+            e.real(20, y);
         }
+    };
+    auto poly = [&](const Rect& r, const std::string& layer) {
+        loop({{r.x0, r.y0}, {r.x1, r.y0}, {r.x1, r.y1}, {r.x0, r.y1}}, layer);
     };
     auto text = [&](double x, double y, double h, const std::string& s) {
         e.pair(0, "TEXT");
@@ -118,9 +120,12 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
         e.pair(100, "AcDbText");
         e.pair(73, 2); // middle
     };
-    poly(Rect{0, 0, fp.width, fp.depth}, "OUTLINE");
+    // The building's outline: one closed polyline round the outside, one
+    // round each courtyard.
+    for (const OutlineLoop& l : footprintOutline(fp)) loop(l, "OUTLINE");
     const std::string unit = brief.units == "ft" ? "ft2" : "m2";
-    for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+    for (std::size_t i = 0; i < v.rooms.size() && i < brief.rooms.size(); ++i) {
+        if (brief.rooms[i].cutout) continue;
         const Rect& r = v.rooms[i];
         poly(r, dxfLayerOf(brief.rooms[i].category));
         if (options.wallThickness > 0) {

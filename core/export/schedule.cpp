@@ -10,9 +10,10 @@ std::string areaUnit(const std::string& units) { return units == "ft" ? "ft²" :
 AreaSchedule areaSchedule(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
     AreaSchedule s;
     s.units = brief.units;
-    s.footprintArea = fp.width * fp.depth;
-    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
+    s.footprintArea = fp.netArea(); // the building's, cut-outs taken off
+    for (std::size_t i = 0; i < brief.rooms.size() && i < v.rooms.size(); ++i) {
         const Room& room = brief.rooms[i];
+        if (room.cutout) continue;
         const Rect& r = v.rooms[i];
         ScheduleRow row;
         row.id = room.id;

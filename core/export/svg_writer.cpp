@@ -48,7 +48,9 @@ std::string planSvg(const Brief& brief, const Footprint& fp, const PlanVariant& 
            "stroke-width:1;stroke-dasharray:4 3}.outline{fill:none;stroke:#000;stroke-width:3}"
            "text{font-family:sans-serif;fill:#111;text-anchor:middle}</style>\n";
     const std::string unit = areaUnit(brief.units);
-    for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+    const std::size_t rooms = std::min(v.rooms.size(), brief.rooms.size());
+    for (std::size_t i = 0; i < rooms; ++i) {
+        if (brief.rooms[i].cutout) continue;
         const Rect& r = v.rooms[i];
         out += "  <rect class=\"room\" id=\"" + escaped(brief.rooms[i].id) + "\" x=\"" + fmt(X(r.x0)) + "\" y=\"" +
                fmt(Y(r.y1)) + "\" width=\"" + fmt(r.width() * ppu) + "\" height=\"" + fmt(r.depth() * ppu) + "\"/>\n";
@@ -56,9 +58,14 @@ std::string planSvg(const Brief& brief, const Footprint& fp, const PlanVariant& 
     for (const Rect& r : v.spaces)
         out += "  <rect class=\"spare\" x=\"" + fmt(X(r.x0)) + "\" y=\"" + fmt(Y(r.y1)) + "\" width=\"" +
                fmt(r.width() * ppu) + "\" height=\"" + fmt(r.depth() * ppu) + "\"/>\n";
-    out += "  <rect class=\"outline\" x=\"" + fmt(X(0)) + "\" y=\"" + fmt(Y(fp.depth)) + "\" width=\"" +
-           fmt(fp.width * ppu) + "\" height=\"" + fmt(fp.depth * ppu) + "\"/>\n";
-    for (std::size_t i = 0; i < v.rooms.size(); ++i) {
+    // The building's outline (round the outside and each courtyard).
+    for (const OutlineLoop& loop : footprintOutline(fp)) {
+        std::string points;
+        for (const auto& [x, y] : loop) points += (points.empty() ? "" : " ") + fmt(X(x)) + "," + fmt(Y(y));
+        out += "  <polygon class=\"outline\" points=\"" + points + "\"/>\n";
+    }
+    for (std::size_t i = 0; i < rooms; ++i) {
+        if (brief.rooms[i].cutout) continue;
         const Rect& r = v.rooms[i];
         const double size = std::clamp(std::min(r.width(), r.depth()) * ppu / 6.0, 7.0, 16.0);
         const double cx = X((r.x0 + r.x1) / 2), cy = Y((r.y0 + r.y1) / 2);

@@ -1,10 +1,10 @@
 # SPDX-License-Identifier: MIT
-"""The clinic and office-floor samples, each read off a plan drawn here (the
+"""The clinic, office-floor and L-shaped studio samples, each read off a plan drawn here (the
 witness), so that an exact answer is known to exist; the plans are invented
 (room sizes are common practice, no source).
 
     /usr/bin/python3 tests/python/sample_plans.py write SAMPLES_DIR
-        rewrites SAMPLES_DIR/clinic.abut.json and office-floor.abut.json
+        rewrites SAMPLES_DIR/clinic.abut.json, office-floor.abut.json and l-shaped-studio.abut.json
     /usr/bin/python3 tests/python/sample_plans.py check ABUT_CLI SAMPLES_DIR
         the test (CTest py_sample_plans): each sample matches its drawing,
         the drawing meets the sample's brief exactly (judged with shapely),
@@ -151,7 +151,55 @@ def office_floor():
     return W, D, rooms, adj
 
 
-SAMPLES = {"clinic": clinic, "office-floor": office_floor}
+def l_shaped_studio():
+    """An upper floor of a small design studio on an L-shaped footprint
+    (24 × 18 m less a 12 × 9 m cut-out at the north-east: the roof terrace of
+    the floor below): a south wing and a west wing, each with a corridor, a
+    stair and lift core fixed at the junction (it lines up with the floors
+    below)."""
+    W, D = 24.0, 18.0
+    cut = (12.0, 9.0, 24.0, 18.0)
+    rooms = []
+
+    def add(rid, name, rect, category, min_w, aspect, facade):
+        rooms.append((rid, name, rect, category, min_w, aspect, facade))
+
+    add("reception", "Reception", (0.0, 0.0, 6.3, 4.5), "circulation", 3.6, None, ["S"])
+    add("office_a", "Office A", (6.3, 0.0, 10.2, 4.5), "work", 3.0, 2.0, ["S"])
+    add("office_b", "Office B", (10.2, 0.0, 14.1, 4.5), "work", 3.0, 2.0, ["S"])
+    add("meeting", "Meeting room", (14.1, 0.0, 19.5, 4.5), "work", 4.0, 1.6, ["S"])
+    add("office_c", "Office C", (19.5, 0.0, 24.0, 4.5), "work", 3.4, 2.0, ["E"])
+    add("corr_s", "South corridor", (6.3, 4.5, 24.0, 6.3), "circulation", 1.5, None, None)
+    add("corr_w", "West corridor", (4.5, 4.5, 6.3, 18.0), "circulation", 1.5, None, None)
+    add("core", "Stair and lift", (6.3, 6.3, 9.3, 9.0), "circulation", 2.4, None, None)
+    add("wc", "WCs", (9.3, 6.3, 12.3, 9.0), "service", 2.2, None, None)
+    add("store", "Store", (12.3, 6.3, 14.7, 9.0), "storage", 2.0, None, None)
+    add("kitchenette", "Kitchenette", (14.7, 6.3, 18.3, 9.0), "service", 2.2, None, ["N"])
+    add("print", "Print room", (18.3, 6.3, 21.0, 9.0), "service", 2.2, None, None)
+    add("plant", "Plant room", (21.0, 6.3, 24.0, 9.0), "service", 2.2, None, None)
+    add("office_d", "Office D", (0.0, 4.5, 4.5, 8.4), "work", 3.2, 2.0, ["W"])
+    add("office_e", "Office E", (0.0, 8.4, 4.5, 12.3), "work", 3.2, 2.0, ["W"])
+    add("office_f", "Office F", (0.0, 12.3, 4.5, 15.3), "work", 2.6, 2.0, ["W"])
+    add("office_g", "Office G", (0.0, 15.3, 4.5, 18.0), "work", 2.3, 2.0, ["N"])
+    add("studio", "Studio", (6.3, 9.0, 12.0, 14.4), "work", 4.6, 1.6, ["E"])
+    add("quiet", "Quiet room", (6.3, 14.4, 12.0, 18.0), "work", 3.0, 2.0, ["N"])
+    rects = {r[0]: r[2] for r in rooms}
+    corridors = ["corr_s", "corr_w"]
+    adj = [("corr_s", "corr_w", "wall", "must")]
+    for rid, *_ in rooms:
+        if rid in corridors:
+            continue
+        best = max(corridors, key=lambda c: shared(rects[rid], rects[c]))
+        assert shared(rects[rid], rects[best]) >= DOOR, rid
+        adj.append((rid, best, "door", "must"))
+    for a, b in [("office_a", "office_b"), ("print", "plant"), ("studio", "quiet")]:
+        adj.append((a, b, "wall", "should"))
+    extra = {"cutouts": [{"x": cut[0], "y": cut[1], "width": cut[2] - cut[0], "depth": cut[3] - cut[1]}],
+             "fixed": ["core"]}
+    return W, D, rooms, adj, extra
+
+
+SAMPLES = {"clinic": clinic, "office-floor": office_floor, "l-shaped-studio": l_shaped_studio}
 
 
 def area(rect):
@@ -159,15 +207,21 @@ def area(rect):
 
 
 def brief_of(name):
-    W, D, rooms, adj = SAMPLES[name]()
+    W, D, rooms, adj, *more = SAMPLES[name]()
+    extra = more[0] if more else {}
     out = {"format": "abut.project", "version": 1, "units": "m", "footprint": {"width": W, "depth": D},
            "doorWidth": DOOR, "rooms": [], "adjacencies": [], "sketch": {}}
+    if extra.get("cutouts"):
+        out["footprint"]["cutouts"] = extra["cutouts"]
     for rid, label, rect, category, min_w, aspect, facade in rooms:
         r = {"id": rid, "name": label, "area": area(rect), "minWidth": min_w, "category": category}
         if aspect:
             r["maxAspect"] = aspect
         if facade:
             r["facade"] = facade
+        if rid in extra.get("fixed", []):
+            r["fixed"] = {"x": rect[0], "y": rect[1], "width": round(rect[2] - rect[0], 6),
+                          "depth": round(rect[3] - rect[1], 6)}
         out["rooms"].append(r)
         # Bubble positions: the drawing's room centres, 14 units per metre,
         # y northwards as in the plan.
