@@ -24,6 +24,7 @@ const char* toString(DiagnosticCode c) {
     case DiagnosticCode::FacadeConflict: return "facade-conflict";
     case DiagnosticCode::FacadeUnmet: return "facade-unmet";
     case DiagnosticCode::FacadeTooShort: return "facade-too-short";
+    case DiagnosticCode::FixedOffTarget: return "fixed-off-target";
     case DiagnosticCode::OverFootprint: return "over-footprint";
     case DiagnosticCode::WiderThanFootprint: return "wider-than-footprint";
     case DiagnosticCode::ShortDoorWall: return "short-door-wall";

@@ -23,6 +23,7 @@ enum class DiagnosticCode {
     FacadeConflict,     // facade wishes that cannot all be met
     FacadeUnmet,        // a room that misses the facade it wishes for
     FacadeTooShort,     // rooms that wish one facade need more of it than it is long
+    FixedOffTarget,     // a room fixed in place at an area off its target band
     OverFootprint,      // targets add up to more than the footprint
     WiderThanFootprint, // a room's minimum width exceeds the footprint
     ShortDoorWall,      // door adjacencies with less than a door's width of wall

@@ -40,7 +40,7 @@ BriefSummary summarize(const Brief& brief) {
     s.targetArea = brief.totalTargetArea();
     s.footprint = brief.effectiveFootprint();
     s.footprintGiven = brief.footprint.has_value();
-    s.footprintArea = s.footprint.width * s.footprint.depth;
+    s.footprintArea = s.footprint.netArea(); // cut-outs are not building
     return s;
 }
 
@@ -96,7 +96,7 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
                             {"should", s.shoulds}};
         j["targetArea"] = s.targetArea;
         j["footprint"] = {{"width", s.footprint.width}, {"depth", s.footprint.depth},
-                          {"given", s.footprintGiven}};
+                          {"given", s.footprintGiven}, {"netArea", s.footprintArea}};
         OrderedJson dropped = OrderedJson::array();
         for (int d : plan.dropped)
             dropped.push_back({brief.adjacencies[d].a, brief.adjacencies[d].b});
@@ -122,7 +122,8 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
         << " wall; " << s.musts << " must, " << s.shoulds << " should)\n";
     out << "  target area:  " << fixed(s.targetArea) << " " << u << "²\n";
     out << "  footprint:    " << fixed(s.footprint.width, 2) << " × " << fixed(s.footprint.depth, 2)
-        << " " << u << " = " << fixed(s.footprintArea) << " " << u << "²"
+        << " " << u << (s.footprint.cutouts.empty() ? "" : " less " + std::to_string(s.footprint.cutouts.size()) + " cut-out(s)")
+        << " = " << fixed(s.footprintArea) << " " << u << "²"
         << (s.footprintGiven ? "" : " (none given: sized to the target area)") << "\n";
     if (s.footprintArea > 0) {
         double spare = s.footprintArea - s.targetArea;

@@ -64,6 +64,16 @@ BriefPanel::BriefPanel(Document* doc, QWidget* parent) : QWidget(parent), doc_(d
     site->addWidget(new QLabel(tr("Door wall"), this));
     site->addWidget(door_);
     site->addSpacing(12);
+    cutouts_ = new QLineEdit(this);
+    cutouts_->setObjectName(QStringLiteral("footprintCutouts"));
+    cutouts_->setPlaceholderText(tr("none"));
+    cutouts_->setMaximumWidth(170);
+    cutouts_->setToolTip(tr("Parts of the footprint that are not building (an L, a U, a courtyard): four numbers "
+                            "each — x and y of the south-west corner, width, depth — cut-outs separated by \";\", "
+                            "e.g. \"12 9 12 9\". A wall on a cut-out is an outside wall."));
+    site->addWidget(new QLabel(tr("Cut-outs"), this));
+    site->addWidget(cutouts_);
+    site->addSpacing(12);
     totals_ = new QLabel(this);
     totals_->setObjectName(QStringLiteral("totals"));
     site->addWidget(totals_, 1);
@@ -103,6 +113,7 @@ BriefPanel::BriefPanel(Document* doc, QWidget* parent) : QWidget(parent), doc_(d
     connect(width_, &QLineEdit::editingFinished, this, [this] { briefFieldEdited(int(BriefField::FootprintWidth), width_); });
     connect(depth_, &QLineEdit::editingFinished, this, [this] { briefFieldEdited(int(BriefField::FootprintDepth), depth_); });
     connect(door_, &QLineEdit::editingFinished, this, [this] { briefFieldEdited(int(BriefField::DoorWidth), door_); });
+    connect(cutouts_, &QLineEdit::editingFinished, this, [this] { briefFieldEdited(int(BriefField::Cutouts), cutouts_); });
     connect(units_, &QComboBox::activated, this, [this] {
         if (filling_ || !doc_) return;
         Brief b = doc_->brief();
@@ -194,10 +205,11 @@ void BriefPanel::refill() {
     width_->setText(b.footprint ? number(b.footprint->width) : QString());
     depth_->setText(b.footprint ? number(b.footprint->depth) : QString());
     door_->setText(number(b.doorWidth));
+    cutouts_->setText(b.footprint ? QString::fromStdString(cutoutsText(b.footprint->cutouts)) : QString());
     units_->setCurrentIndex(b.units == "ft" ? 1 : 0);
 
     const Footprint f = b.effectiveFootprint();
-    const double target = b.totalTargetArea(), site = f.width * f.depth;
+    const double target = b.totalTargetArea(), site = f.netArea();
     QString balance;
     if (b.footprint && site > 0) {
         const double diff = site - target;
@@ -243,7 +255,10 @@ void BriefPanel::briefFieldEdited(int field, QLineEdit* edit) {
         refuse(QString::fromStdString(r.message), at);
         return;
     }
-    doc_->edit(field == int(BriefField::DoorWidth) ? tr("Change door wall length") : tr("Change footprint"), b);
+    doc_->edit(field == int(BriefField::DoorWidth) ? tr("Change door wall length")
+               : field == int(BriefField::Cutouts) ? tr("Change cut-outs")
+                                                   : tr("Change footprint"),
+               b);
     refill();
 }
 

@@ -57,6 +57,7 @@ private:
     QLineEdit* width_ = nullptr;
     QLineEdit* depth_ = nullptr;
     QLineEdit* door_ = nullptr;
+    QLineEdit* cutouts_ = nullptr; // footprint.cutouts, typed
     QComboBox* units_ = nullptr;
     QLabel* totals_ = nullptr;
     bool filling_ = false;

@@ -159,6 +159,17 @@ MainWindow::MainWindow(const MainWindowOptions& options, QWidget* parent)
     connect(planView_, &PlanView::targetDragged, this, &MainWindow::targetDragged);
     planView_->setSession(session_);
     connect(planView_, &PlanView::lockToggled, session_, &PlanSession::toggleLock);
+    connect(planView_, &PlanView::fixToggled, this, [this](int room, std::optional<Placement> at) {
+        Brief b = doc_->brief();
+        if (room < 0 || room >= int(b.rooms.size())) return;
+        const QString name = QString::fromStdString(b.rooms[room].displayName());
+        const EditResult r = setRoomFixed(b, room, at);
+        if (!r.ok()) {
+            statusBar()->showMessage(QString::fromStdString(r.message), 8000);
+            return;
+        }
+        doc_->edit(at ? tr("Fix %1 in place").arg(name) : tr("Free %1").arg(name), b);
+    });
     connect(session_, &PlanSession::currentChanged, this, &MainWindow::showCurrent);
     connect(session_, &PlanSession::variantsChanged, this, &MainWindow::variantsChanged);
     connect(planView_, &PlanView::roomHovered, this, &MainWindow::hoverRoom);

@@ -42,7 +42,8 @@ void PlanView::setVariant(const Brief& brief, const Footprint& footprint, const 
     drag_ = Drag::None;
     notes_.assign(brief.rooms.size(), {});
     hint_.assign(brief.rooms.size(), {});
-    if (v_.rooms.size() == brief.rooms.size()) {
+    planned_ = plannedBrief(brief);
+    if (v_.rooms.size() == planned_.rooms.size()) {
         for (const UnmetItem& u : unmetRequirements(brief, footprint, v_)) {
             QStringList lines{QString::fromStdString(u.text)};
             for (const std::string& h : heldBy(u, v_.relaxations))
@@ -119,10 +120,10 @@ const std::set<int>& PlanView::locked() const {
 
 void PlanView::rebuildProblem() {
     problem_.reset();
-    if (!has_ || v_.extended.graph.vertexCount() == 0 || v_.rooms.size() != brief_.rooms.size()) return;
+    planned_ = plannedBrief(brief_);
+    if (!has_ || v_.extended.graph.vertexCount() == 0 || v_.rooms.size() != planned_.rooms.size()) return;
     SizingOptions o = planSizingOptions(brief_);
     o.lockedRooms.assign(locked().begin(), locked().end());
-    planned_ = plannedBrief(brief_);
     problem_ = std::make_unique<SizingProblem>(planned_, v_.extended, v_.labeling, fp_, o);
     state_ = problem_->stateOf(vertexRects(v_));
 }
@@ -152,7 +153,8 @@ std::vector<PlanView::Handle> PlanView::handles() const {
                 const Rect& r = state_.rects[u];
                 h.from = std::min(h.from, vertical ? r.y0 : r.x0);
                 h.to = std::max(h.to, vertical ? r.y1 : r.x1);
-                lockedSide = lockedSide || (u < int(brief_.rooms.size()) && locked().count(u));
+                // A locked room's walls stay; so do those of a room fixed in place and a cut-out's.
+                lockedSide = lockedSide || (u < int(planned_.rooms.size()) && (locked().count(u) || planned_.rooms[u].fixed));
             }
             if (lockedSide || h.from > h.to) continue;
             std::tie(h.lo, h.hi) = problem_->segmentRange(state_, vertical, k);
@@ -217,7 +219,7 @@ void PlanView::mousePressEvent(QMouseEvent* event) {
         const QString id = roomAt(at);
         if (id.isEmpty()) return;
         dragRoom_ = brief_.roomIndex(id.toStdString());
-        if (locked().count(dragRoom_)) return; // its size is held
+        if (locked().count(dragRoom_) || brief_.rooms[dragRoom_].fixed) return; // its size is held
         drag_ = Drag::Target;
         dragStartY_ = at.y();
         dragStartArea_ = dragArea_ = brief_.rooms[dragRoom_].area;
@@ -308,8 +310,24 @@ void PlanView::contextMenuEvent(QContextMenuEvent* event) {
     const int room = brief_.roomIndex(id.toStdString());
     QMenu menu(this);
     const QString name = QString::fromStdString(brief_.rooms[room].displayName());
-    QAction* lock = menu.addAction(locked().count(room) ? tr("Unlock size of %1").arg(name) : tr("Lock size of %1").arg(name));
-    if (menu.exec(event->globalPos()) == lock) emit lockToggled(room);
+    const bool fixed = brief_.rooms[room].fixed.has_value();
+    QAction* lock = fixed ? nullptr
+                          : menu.addAction(locked().count(room) ? tr("Unlock size of %1").arg(name)
+                                                                : tr("Lock size of %1").arg(name));
+    // Fixing keeps the room exactly where it is in every variant (a stair
+    // core that lines up with the floors below); the brief records it.
+    QAction* fix = menu.addAction(fixed ? tr("Free %1 (no longer fixed in place)").arg(name)
+                                        : tr("Fix %1 where it is").arg(name));
+    QAction* chosen = menu.exec(event->globalPos());
+    if (chosen && chosen == lock) emit lockToggled(room);
+    if (chosen && chosen == fix) {
+        if (fixed) {
+            emit fixToggled(room, std::nullopt);
+        } else {
+            const Rect& r = v_.rooms[room];
+            emit fixToggled(room, Placement{r.x0, r.y0, r.width(), r.depth()});
+        }
+    }
 }
 
 

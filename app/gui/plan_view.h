@@ -71,6 +71,8 @@ signals:
     void wallMoved(const abut::PlanVariant& resized, const QString& description);
     void targetDragged(int room, double area, const abut::PlanVariant& resized);
     void lockToggled(int room);
+    // Fix the room where it is (a placement) or free it (nullopt): a brief edit.
+    void fixToggled(int room, std::optional<abut::Placement> at);
 
 protected:
     void paintEvent(QPaintEvent* event) override;

@@ -82,6 +82,18 @@ void PlanView::paintEvent(QPaintEvent*) {
             p.drawText(box, Qt::AlignCenter, tr("spare"));
         }
     }
+    // Cut-outs: not building, hatched and named.
+    for (std::size_t k = 0; k < fp_.cutouts.size(); ++k) {
+        const Placement& c = fp_.cutouts[k];
+        const QRectF box = toScreen(Rect{c.x, c.y, c.x + c.width, c.y + c.depth});
+        p.setPen(Qt::NoPen);
+        p.setBrush(QBrush(QColor(0x88, 0x88, 0x88), Qt::FDiagPattern));
+        p.drawRect(box);
+        if (box.width() > 60 && box.height() > 16) {
+            p.setPen(QColor(0x44, 0x44, 0x44));
+            p.drawText(box, Qt::AlignCenter, tr("cut-out %1 (not building)").arg(k + 1));
+        }
+    }
     for (std::size_t i = 0; i < v_.rooms.size() && i < brief_.rooms.size(); ++i) {
         const Room& room = brief_.rooms[i];
         const QRectF box = toScreen(v_.rooms[i]);
@@ -148,6 +160,18 @@ void PlanView::paintEvent(QPaintEvent*) {
                            sm.elidedText(QStringLiteral("\u2192 ") + hint_[i], Qt::ElideRight, box.width() - 8));
             }
         }
+        if (room.fixed) {
+            // Fixed in place: a second, dash-dotted line inside its walls and
+            // the word, not colour alone.
+            p.setPen(QPen(ink, 1.2, Qt::DashDotLine));
+            p.setBrush(Qt::NoBrush);
+            p.drawRect(box.adjusted(4, 4, -4, -4));
+            QFont small = font();
+            small.setPixelSize(10);
+            p.setFont(small);
+            p.setPen(ink);
+            p.drawText(box.adjusted(6, 5, -6, -5), Qt::AlignTop | Qt::AlignLeft, tr("fixed"));
+        }
         if (locked().count(int(i))) {
             QFont small = font();
             small.setPixelSize(10);
@@ -172,7 +196,11 @@ void PlanView::paintEvent(QPaintEvent*) {
     // The footprint outline.
     p.setBrush(Qt::NoBrush);
     p.setPen(QPen(QColor(0x1F, 0x3A, 0x93), 3));
-    p.drawRect(toScreen(Rect{0, 0, fp_.width, fp_.depth}));
+    for (const OutlineLoop& loop : footprintOutline(fp_)) {
+        QPolygonF poly;
+        for (const auto& [x, y] : loop) poly << toScreen(x, y);
+        p.drawPolygon(poly);
+    }
     // Dropped adjacencies: a dashed line between the rooms, × in the middle.
     QStringList droppedText;
     for (int a : v_.dropped) {

@@ -208,6 +208,7 @@ Brief plannedBrief(const Brief& brief) {
             const Placement& c = brief.footprint->cutouts[k];
             Room r;
             r.id = "cutout-" + std::to_string(k + 1);
+            while (out.roomIndex(r.id) >= 0) r.id += "+"; // never a room of the brief
             r.name = "Cut-out " + std::to_string(k + 1);
             r.area = c.area();
             r.areaTolerance = 0.0;

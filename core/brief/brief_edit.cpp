@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: MIT
 #include "brief/brief_edit.h"
 
+#include <sstream>
+
 #include <algorithm>
 #include <cctype>
 #include <cmath>
@@ -209,14 +211,33 @@ EditResult setRoomField(Brief& brief, int index, RoomField field, const std::str
     return EditResult::refused("Unknown field.");
 }
 
+namespace {
+EditResult setBriefFieldUnchecked(Brief& brief, BriefField field, const std::string& t);
+} // namespace
+
 EditResult setBriefField(Brief& brief, BriefField field, const std::string& text) {
     const std::string t = trimmed(text);
+    const std::optional<Footprint> footprint = brief.footprint; // put back when refused
+    const EditResult r = setBriefFieldUnchecked(brief, field, t);
+    if (!r.ok()) {
+        brief.footprint = footprint;
+        return r;
+    }
+    if (const std::string problem = placementProblem(brief); !problem.empty()) {
+        brief.footprint = footprint;
+        return EditResult::refused(problem);
+    }
+    return {};
+}
+
+namespace {
+EditResult setBriefFieldUnchecked(Brief& brief, BriefField field, const std::string& t) {
     switch (field) {
     case BriefField::FootprintWidth:
     case BriefField::FootprintDepth: {
         if (t.empty()) {
             brief.footprint.reset();
-            return {};
+            break;
         }
         double v = 0;
         const bool width = field == BriefField::FootprintWidth;
@@ -225,7 +246,7 @@ EditResult setBriefField(Brief& brief, BriefField field, const std::string& text
         Footprint f = brief.footprint.value_or(brief.effectiveFootprint());
         (width ? f.width : f.depth) = v;
         brief.footprint = f;
-        return {};
+        break;
     }
     case BriefField::DoorWidth:
     {
@@ -236,14 +257,99 @@ EditResult setBriefField(Brief& brief, BriefField field, const std::string& text
             return EditResult::refused("Door wall length " + formatValue(v) +
                                        " is longer than the footprint's shorter side.");
         brief.doorWidth = v;
-        return {};
+        break;
     }
     case BriefField::Units:
         if (t != "m" && t != "ft") return EditResult::refused("Units must be \"m\" or \"ft\", got \"" + t + "\".");
         brief.units = t;
         return {};
+    case BriefField::Cutouts: {
+        std::vector<Placement> cuts;
+        std::size_t from = 0;
+        while (from <= t.size() && !t.empty()) {
+            const std::size_t semi = std::min(t.find(';', from), t.size());
+            const std::string part = trimmed(t.substr(from, semi - from));
+            from = semi + 1;
+            if (part.empty()) continue;
+            std::vector<double> v;
+            std::istringstream words(part);
+            for (std::string w; words >> w;) {
+                const std::optional<double> x = parsePlannerNumber(w);
+                if (!x) return EditResult::refused("Cut-out \"" + part + "\": \"" + w + "\" is not a number.");
+                v.push_back(*x);
+            }
+            if (v.size() != 4)
+                return EditResult::refused("Cut-out \"" + part +
+                                           "\" needs four numbers: x and y of its south-west corner, its width and its depth.");
+            if (v[2] <= 0 || v[3] <= 0 || v[0] < 0 || v[1] < 0)
+                return EditResult::refused("Cut-out \"" + part + "\": its corner cannot be below 0 and its width and depth must be greater than 0.");
+            cuts.push_back({v[0], v[1], v[2], v[3]});
+        }
+        if (!cuts.empty() && !brief.footprint)
+            return EditResult::refused("Give the footprint a width and depth before cutting parts out of it.");
+        if (brief.footprint) brief.footprint->cutouts = std::move(cuts);
+        break;
     }
-    return EditResult::refused("Unknown field.");
+    }
+    return {};
+}
+} // namespace
+
+std::string placementProblem(const Brief& brief) {
+    const auto inside = [&](const Placement& p) {
+        const double tol = 1e-9 * std::max(brief.footprint->width, brief.footprint->depth);
+        return p.x >= -tol && p.y >= -tol && p.x + p.width <= brief.footprint->width + tol &&
+               p.y + p.depth <= brief.footprint->depth + tol;
+    };
+    if (!brief.footprint) {
+        for (const Room& r : brief.rooms)
+            if (r.fixed) return r.displayName() + " is fixed in place, which needs a footprint with a width and depth.";
+        return {};
+    }
+    const Footprint& fp = *brief.footprint;
+    const double tol = 1e-6 * std::max(fp.width, fp.depth);
+    for (std::size_t k = 0; k < fp.cutouts.size(); ++k) {
+        const std::string name = "Cut-out " + std::to_string(k + 1);
+        if (!inside(fp.cutouts[k])) return name + " reaches past the footprint.";
+        for (std::size_t i = 0; i < k; ++i)
+            if (overlaps(fp.cutouts[k], fp.cutouts[i], tol))
+                return name + " overlaps cut-out " + std::to_string(i + 1) + "; draw the part they share once.";
+    }
+    if (!fp.cutouts.empty() && fp.netArea() <= tol * tol) return "The cut-outs leave nothing of the footprint to build on.";
+    if (!fp.cutouts.empty() && !isConnected(fp))
+        return "The cut-outs split the footprint in two; a plan is one piece (make one smaller or move it to an edge).";
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
+        const Room& r = brief.rooms[i];
+        if (!r.fixed || r.cutout) continue;
+        if (!inside(*r.fixed)) return r.displayName() + " is fixed outside the footprint.";
+        for (std::size_t k = 0; k < fp.cutouts.size(); ++k)
+            if (overlaps(*r.fixed, fp.cutouts[k], tol))
+                return r.displayName() + " is fixed over cut-out " + std::to_string(k + 1) + ", which is not building.";
+        for (std::size_t j = 0; j < i; ++j)
+            if (brief.rooms[j].fixed && overlaps(*r.fixed, *brief.rooms[j].fixed, tol))
+                return r.displayName() + " is fixed where " + brief.rooms[j].displayName() +
+                       " is fixed; two rooms cannot share floor.";
+    }
+    return {};
+}
+
+EditResult setRoomFixed(Brief& brief, int room, std::optional<Placement> at) {
+    if (room < 0 || room >= static_cast<int>(brief.rooms.size())) return EditResult::refused("No such room.");
+    const std::optional<Placement> before = brief.rooms[room].fixed;
+    brief.rooms[room].fixed = at;
+    if (const std::string problem = placementProblem(brief); !problem.empty()) {
+        brief.rooms[room].fixed = before;
+        return EditResult::refused(problem);
+    }
+    return {};
+}
+
+std::string cutoutsText(const std::vector<Placement>& cutouts) {
+    std::string out;
+    for (const Placement& c : cutouts)
+        out += (out.empty() ? "" : "; ") + formatValue(c.x) + " " + formatValue(c.y) + " " + formatValue(c.width) + " " +
+               formatValue(c.depth);
+    return out;
 }
 
 namespace {

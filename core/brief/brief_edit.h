@@ -58,11 +58,28 @@ enum class RoomField { Name, Category, Area, MinWidth, MaxAspect, Facade };
 // separators, "any", or empty.
 EditResult setRoomField(Brief& brief, int room, RoomField field, const std::string& text);
 
-enum class BriefField { FootprintWidth, FootprintDepth, DoorWidth, Units };
+enum class BriefField { FootprintWidth, FootprintDepth, DoorWidth, Units, Cutouts };
 
 // Sets a brief-wide field from typed text. An empty footprint width or depth
 // removes the footprint (the plan then uses a rectangle of the total area).
+// Cut-outs are typed as four numbers each — x, y (south-west corner), width,
+// depth — separated by spaces, cut-outs by ";" ("12 9 12 9; 0 0 3 2");
+// empty: none. A footprint change that would leave a cut-out or a fixed room
+// outside, or a cut-out that splits the footprint, is refused.
 EditResult setBriefField(Brief& brief, BriefField field, const std::string& text);
+
+// Fixes room `room` where `at` says (nullopt: frees it). Refused when it
+// would stand outside the footprint, on a cut-out or on another fixed room.
+EditResult setRoomFixed(Brief& brief, int room, std::optional<Placement> at);
+
+// The first thing wrong with the footprint's cut-outs and the fixed rooms,
+// in the planner's words (empty: nothing): outside the footprint, cut-outs
+// that overlap or split the footprint, a fixed room on a cut-out or on
+// another fixed room, a fixed room without a footprint.
+std::string placementProblem(const Brief& brief);
+
+// "12 9 12 9; 0 0 3 2" for the cut-outs.
+std::string cutoutsText(const std::vector<Placement>& cutouts);
 
 // Parses a length or area typed by a planner: "12.5", "12,5", "12.5 m²".
 // Returns nullopt when the text is not one finite number.

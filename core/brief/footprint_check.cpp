@@ -20,7 +20,7 @@ std::vector<Diagnostic> footprintProblems(const Brief& brief) {
     if (!brief.footprint) return out;
     const Footprint fp = *brief.footprint;
     const double total = brief.totalTargetArea();
-    const double available = fp.width * fp.depth;
+    const double available = fp.netArea(); // cut-outs are not building
     const std::string u = brief.units;
     if (total > available * (1.0 + 1e-9)) {
         Diagnostic d;
@@ -29,6 +29,7 @@ std::vector<Diagnostic> footprintProblems(const Brief& brief) {
         d.message = "The rooms' target areas add up to " + formatNumber(total) + " " + u +
                     "\xC2\xB2, more than the footprint's " + formatNumber(available) + " " + u + "\xC2\xB2 (" +
                     formatNumber(fp.width) + " \xC3\x97 " + formatNumber(fp.depth) +
+                    (fp.cutouts.empty() ? std::string() : std::string(" less its cut-outs")) +
                     "): enlarge the footprint or lower some targets.";
         out.push_back(d);
     }
@@ -47,8 +48,32 @@ std::vector<Diagnostic> footprintProblems(const Brief& brief) {
     // Rooms that wish one side only all need a stretch of that facade at
     // least their minimum width long (a room wider than its minimum on the
     // facade is fine; narrower is not).
+    // Exterior wall facing each side: the outline's edges, building on their
+    // left (cut-outs' walls included, facing away from the building).
+    double facing[4] = {0, 0, 0, 0};
+    for (const OutlineLoop& loop : footprintOutline(fp))
+        for (std::size_t k = 0; k < loop.size(); ++k) {
+            const auto& [x0, y0] = loop[k];
+            const auto& [x1, y1] = loop[(k + 1) % loop.size()];
+            const Side s = x1 > x0 ? Side::S : x1 < x0 ? Side::N : y1 > y0 ? Side::E : Side::W;
+            facing[static_cast<int>(s)] += std::abs(x1 - x0) + std::abs(y1 - y0);
+        }
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
+        const Room& room = brief.rooms[i];
+        if (!room.fixed || room.cutout) continue;
+        const double a = room.fixed->area(), dev = (a - room.area) / room.area;
+        if (std::abs(dev) <= room.tolerance() + 1e-9) continue;
+        Diagnostic d;
+        d.severity = Severity::Warning;
+        d.code = DiagnosticCode::FixedOffTarget;
+        d.message = room.displayName() + " is fixed at " + formatNumber(room.fixed->width) + " \xC3\x97 " +
+                    formatNumber(room.fixed->depth) + " = " + formatNumber(a) + " " + u + "\xC2\xB2, but its target is " +
+                    formatNumber(room.area) + " " + u + "\xC2\xB2: set the target to what it is fixed at, or fix it larger or smaller.";
+        d.rooms = {static_cast<int>(i)};
+        out.push_back(d);
+    }
     for (Side side : allSides) {
-        const double length = (side == Side::N || side == Side::S) ? fp.width : fp.depth;
+        const double length = facing[static_cast<int>(side)];
         double need = 0;
         std::vector<int> rooms;
         for (std::size_t i = 0; i < brief.rooms.size(); ++i) {

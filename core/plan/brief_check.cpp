@@ -15,7 +15,7 @@ class KeepsEverything : public SearchVisitor {
 public:
     bool onRound(const SearchProgress&) override { return !found_; }
     void onImproved(const SearchPlan& plan) override {
-        if (!found_ && plan.misses.must == 0 && plan.misses.facade == 0) {
+        if (!found_ && plan.misses.must == 0 && plan.misses.facade == 0 && plan.misses.fixed == 0) {
             found_ = true;
             plan_ = plan;
         }
@@ -51,7 +51,7 @@ BriefCheck arrangementCheck(const Brief& brief, const BriefCheckOptions& options
     out.searched = true;
     const SearchPlan* plan = visitor.found() ? &visitor.plan() : nullptr;
     for (const SearchPlan& p : found.plans)
-        if (!plan && p.misses.must == 0 && p.misses.facade == 0) plan = &p;
+        if (!plan && p.misses.must == 0 && p.misses.facade == 0 && p.misses.fixed == 0) plan = &p;
     if (!plan) return out;
     out.foundBySearch = true;
     aug.status = AugmentStatus::Feasible;
@@ -82,7 +82,8 @@ BriefCheck arrangementCheck(const Brief& brief, const BriefCheckOptions& options
 } // namespace
 
 BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options) {
-    BriefCheck out = arrangementCheck(brief, options);
+    // Planned as buildPlan plans it: cut-outs as blocks held in place.
+    BriefCheck out = arrangementCheck(plannedBrief(brief), options);
     out.diagnostics = footprintProblems(brief);
     out.fits = std::none_of(out.diagnostics.begin(), out.diagnostics.end(),
                             [](const Diagnostic& d) { return d.severity == Severity::Error; });

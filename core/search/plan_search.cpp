@@ -153,6 +153,9 @@ Problem makeProblem(const Brief& brief, const Footprint& fp, const SearchOptions
         l.must = a.priority == Priority::Must;
         l.need = a.kind == AdjacencyKind::Door ? brief.doorWidth : std::max(4 * o.anyWall, 0.2);
         l.weight = l.must ? 1.0 : 0.12;
+        // Two circulation spaces that must meet carry the building's routes:
+        // their link weighs more than a room's door.
+        if (l.must && p.blocks[u].circulation && p.blocks[v].circulation) l.weight = 3.0;
         p.linksOf[u].push_back(static_cast<int>(p.links.size()));
         p.linksOf[v].push_back(static_cast<int>(p.links.size()));
         p.links.push_back(l);

@@ -23,6 +23,8 @@
 #include <QFileInfo>
 #include <QStatusBar>
 #include <QTemporaryDir>
+#include <QLineEdit>
+#include <QUndoStack>
 #include <QtTest>
 
 using namespace abut;
@@ -279,6 +281,50 @@ private slots:
                       h.from < kept.y1 && h.to > kept.y0));
     }
 
+    // The L-shaped sample: the core fixed, the cut-out hatched; freeing and
+    // fixing the core from the plan are undoable brief edits; its walls are not
+    // offered for dragging while it is fixed; cut-outs typed in the brief panel.
+    void fixedRoomAndCutOutsInTheEditor() {
+        const auto window = windowOn(options(), "l-shaped-studio");
+        QVERIFY(window);
+        MainWindow& w = *window;
+        waitForPlans(w);
+        const int core = w.brief().roomIndex("core");
+        QVERIFY(core >= 0 && w.brief().rooms[core].fixed);
+        const Placement f = *w.brief().rooms[core].fixed;
+        const Rect r = w.currentVariant().rooms[core];
+        QVERIFY(std::abs(r.x0 - f.x) < 1e-6 && std::abs(r.y1 - f.y - f.depth) < 1e-6);
+        for (const PlanView::Handle& h : w.planView()->handles())
+            QVERIFY(!(h.vertical && (std::abs(h.position - r.x0) < 1e-9 || std::abs(h.position - r.x1) < 1e-9) &&
+                      h.from < r.y1 && h.to > r.y0));
+        QUndoStack* undo = w.document()->undoStack();
+        const int before = undo->index();
+        emit w.planView()->fixToggled(core, std::nullopt);
+        QVERIFY(!w.brief().rooms[core].fixed);
+        QCOMPARE(undo->index(), before + 1);
+        undo->undo();
+        QVERIFY(w.brief().rooms[core].fixed);
+        // Fixing a room over the cut-out is refused: the brief stays as it was.
+        const int office = w.brief().roomIndex("office_c");
+        emit w.planView()->fixToggled(office, Placement{13, 10, 3, 3});
+        QVERIFY(!w.brief().rooms[office].fixed);
+        QCOMPARE(undo->index(), before);
+        // Cut-outs typed in the brief panel: one edit; one that splits the footprint is refused.
+        auto* cut = w.briefPanel()->findChild<QLineEdit*>(QStringLiteral("footprintCutouts"));
+        QVERIFY(cut);
+        QCOMPARE(cut->text(), QStringLiteral("12 9 12 9"));
+        cut->setText(QStringLiteral("12 9 12 9; 0 16 3 2"));
+        emit cut->editingFinished();
+        QCOMPARE(w.brief().footprint->cutouts.size(), std::size_t(2));
+        QCOMPARE(undo->index(), before + 1);
+        cut->setText(QStringLiteral("10 0 2 18"));
+        emit cut->editingFinished();
+        QCOMPARE(w.brief().footprint->cutouts.size(), std::size_t(2));
+        QCOMPARE(cut->text(), QStringLiteral("12 9 12 9; 0 16 3 2")); // put back
+        undo->undo();
+        QCOMPARE(w.brief().footprint->cutouts.size(), std::size_t(1));
+    }
+
     void wallSnapsToPlanningGrid() {
         const auto window = windowOn(options(), "family-house");
         QVERIFY(window);
@@ -288,8 +334,12 @@ private slots:
         const double g = 0.3;
         for (const PlanView::Handle& h : w.planView()->handles()) {
             if (!h.vertical || std::ceil(h.lo / g) * g > h.hi) continue; // needs a grid line in range
+            // Let go a little off the first grid line in range (the pointer is
+            // never exactly on it): the wall goes onto the line.
+            const double line = std::ceil(h.lo / g) * g;
+            const double to = line + 0.1 * std::min(g, h.hi - line);
             const QPoint from = w.planView()->screenPointOn(h).toPoint();
-            const int dx = int(0.37 * (h.hi - h.position) * w.planView()->pixelsPerUnit());
+            const int dx = int(std::lround((to - h.position) * w.planView()->pixelsPerUnit()));
             QTest::mousePress(w.planView(), Qt::LeftButton, {}, from);
             QTest::mouseMove(w.planView(), from + QPoint(dx, 0));
             QTest::mouseRelease(w.planView(), Qt::LeftButton, {}, from + QPoint(dx, 0));

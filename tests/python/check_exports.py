@@ -1,7 +1,8 @@
 # SPDX-License-Identifier: MIT
 """Exports read back by independent tools, as a user's CAD and PDF viewer
 would: DXF through ezdxf (audit clean; $INSUNITS 6 for metres and 2 for feet,
-DXF reference as read by ezdxf; room polylines equal the plan's rectangles);
+DXF reference as read by ezdxf; room polylines equal the plan's rectangles;
+the OUTLINE polylines enclose the footprint less its cut-outs, by shapely);
 the PDF sheet through poppler (pdfinfo: ISO 216 A3 = 297 × 420 mm and A4 =
 210 × 297 mm; pdftotext: every room name, the totals and the stated scale;
 pdftoppm: the drawn outline measures footprint ÷ scale); CSV through Python's
@@ -20,6 +21,7 @@ import unicodedata
 import xml.etree.ElementTree as ET
 
 import ezdxf
+from shapely.geometry import Polygon, box
 
 cli, samples = sys.argv[1], sys.argv[2]
 failures, checked = [], 0
@@ -74,6 +76,24 @@ def check(project, tmp):
                 fail(f"{name}: no polyline equals room rectangle {r}")
                 break
             left.remove(match[0])
+    # The outline: closed polylines round the building (one round the outside,
+    # one per courtyard) enclosing exactly the footprint less its cut-outs.
+    fp = brief["footprint"]
+    net = box(0, 0, fp["width"], fp["depth"])
+    for c in fp.get("cutouts", []):
+        net = net.difference(box(c["x"], c["y"], c["x"] + c["width"], c["y"] + c["depth"]))
+    loops = [Polygon([(p[0], p[1]) for p in e.get_points()])
+             for e in doc.modelspace().query("LWPOLYLINE") if e.dxf.layer == "OUTLINE"]
+    if not loops or not all(e.closed for e in doc.modelspace().query("LWPOLYLINE") if e.dxf.layer == "OUTLINE"):
+        fail(f"{name}: DXF outline missing or not closed")
+    else:
+        outer = max(loops, key=lambda q: q.area)
+        drawn = outer
+        for q in loops:
+            if q is not outer:
+                drawn = drawn.difference(q)
+        if abs(drawn.area - net.area) > 1e-6 * net.area or drawn.symmetric_difference(net).area > 1e-6 * net.area:
+            fail(f"{name}: DXF outline encloses {drawn.area:.3f}, the footprint less its cut-outs is {net.area:.3f}")
     names = {t.dxf.text for t in doc.modelspace().query("TEXT")}
     for room in brief["rooms"]:
         label = room.get("name", room["id"])
@@ -148,7 +168,9 @@ def check(project, tmp):
 
 def outline_width(ppm_path):
     """Distance in pixels between the centres of the outline's west and east
-    strokes, found by the outline's colour on a row through its middle."""
+    strokes, found by the outline's colour on the rows it crosses as thin
+    strokes (an L's or a courtyard's horizontal edges are skipped); the widest
+    such row is the bounding width."""
     data = open(ppm_path, "rb").read()
     parts = data.split(maxsplit=4)
     w, h = int(parts[1]), int(parts[2])
@@ -161,15 +183,18 @@ def outline_width(ppm_path):
     ys = [y for y in range(0, h, 3) if any(is_outline(x, y) for x in range(0, w, 2))]
     if not ys:
         return 0
-    mid = (min(ys) + max(ys)) // 2
-    runs, start = [], None
-    for x in range(w):
-        if is_outline(x, mid):
-            start = x if start is None else start
-        elif start is not None:
-            runs.append((start + x - 1) / 2)
-            start = None
-    return runs[-1] - runs[0] if len(runs) >= 2 else 0
+    best = 0
+    for y in ys[2:-2]:
+        runs, start = [], None
+        for x in range(w):
+            if is_outline(x, y):
+                start = x if start is None else start
+            elif start is not None:
+                runs.append((start, x - 1))
+                start = None
+        if len(runs) >= 2 and all(b - a <= 8 for a, b in runs):
+            best = max(best, (runs[-1][0] + runs[-1][1]) / 2 - (runs[0][0] + runs[0][1]) / 2)
+    return best
 
 
 with tempfile.TemporaryDirectory() as tmp:

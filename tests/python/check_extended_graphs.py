@@ -109,9 +109,16 @@ def check(project_path, brief, ext, rep, error):
         if pair not in dropped and not G.has_edge(*pair):
             return fail(f"{where}: adjacency {pair} missing and not reported dropped")
     unmet = set(rep["unmetFacade"])
+    # Cut-outs of the footprint are vertices too (named by Abut, not rooms of
+    # the brief): a wall on one is a facade, the side it faces only the
+    # layout shows (plans are checked with shapely in check_plans/check_quality).
+    ids = {r["id"] for r in brief["rooms"]}
+    cutouts = [v for v in ext["vertices"] if v not in ids and v not in (N, Ea, S, W) and not v.startswith("spare")]
+    if len(cutouts) != len(brief.get("footprint", {}).get("cutouts", [])):
+        return fail(f"{where}: {len(cutouts)} cut-out vertices for {len(brief['footprint'].get('cutouts', []))} cut-outs")
     for room in brief["rooms"]:
         for side in room.get("facade", []):
-            if room["id"] in unmet:
+            if room["id"] in unmet or any(G.has_edge(room["id"], c) for c in cutouts):
                 continue
             if side == "any":
                 if not any(G.has_edge(room["id"], p) for p in (N, Ea, S, W)):
