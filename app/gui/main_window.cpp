@@ -159,6 +159,19 @@ MainWindow::MainWindow(const MainWindowOptions& options, QWidget* parent)
     connect(planView_, &PlanView::targetDragged, this, &MainWindow::targetDragged);
     planView_->setSession(session_);
     connect(planView_, &PlanView::lockToggled, session_, &PlanSession::toggleLock);
+    connect(planView_, &PlanView::cutoutDrawn, this, [this](const Placement& c) {
+        Brief b = doc_->brief();
+        if (!b.footprint) {
+            statusBar()->showMessage(tr("Give the footprint a width and depth before cutting parts out of it."), 8000);
+            return;
+        }
+        b.footprint->cutouts.push_back(c);
+        if (const std::string problem = placementProblem(b); !problem.empty()) {
+            statusBar()->showMessage(QString::fromStdString(problem), 8000);
+            return;
+        }
+        doc_->edit(tr("Cut out %1 × %2").arg(c.width, 0, 'f', 2).arg(c.depth, 0, 'f', 2), b);
+    });
     connect(planView_, &PlanView::fixToggled, this, [this](int room, std::optional<Placement> at) {
         Brief b = doc_->brief();
         if (room < 0 || room >= int(b.rooms.size())) return;

@@ -28,7 +28,8 @@ PlanView::PlanView(QWidget* parent) : QWidget(parent) {
     p.setColor(QPalette::Window, QColor(0xF4, 0xF3, 0xEF));
     setPalette(p);
     setToolTip(tr("Drag an inner wall to move it; Alt+drag up or down on a room to change its target area; "
-                  "right-click a room to lock its size."));
+                  "Shift+drag to cut a rectangle out of the footprint; right-click a room to lock its size or "
+                  "fix it in place."));
 }
 
 PlanView::~PlanView() = default;
@@ -184,6 +185,26 @@ QPointF PlanView::toScreen(double x, double y) const {
     return {origin.x() + x * s, origin.y() + (fp_.depth - y) * s};
 }
 
+QPointF PlanView::toPlan(const QPointF& screen) const {
+    const QPointF origin = toScreen(0, 0);
+    const double s = pixelsPerUnit();
+    return {std::clamp((screen.x() - origin.x()) / s, 0.0, fp_.width),
+            std::clamp((origin.y() - screen.y()) / s, 0.0, fp_.depth)};
+}
+
+Placement PlanView::drawnCutout() const {
+    // On the planning grid, else on 5 cm; an edge near the footprint's goes onto it.
+    const double step = grid_ > 0 ? grid_ : 0.05;
+    auto snap = [&](double v, double edge) {
+        const double on = std::round(v / step) * step;
+        return std::abs(edge - v) < 3 * step ? edge : on;
+    };
+    const double x0 = snap(std::min(cutFrom_.x(), cutTo_.x()), 0.0), x1 = snap(std::max(cutFrom_.x(), cutTo_.x()), fp_.width);
+    const double y0 = snap(std::min(cutFrom_.y(), cutTo_.y()), 0.0), y1 = snap(std::max(cutFrom_.y(), cutTo_.y()), fp_.depth);
+    if (x1 - x0 < 2 * step || y1 - y0 < 2 * step) return {};
+    return {x0, y0, x1 - x0, y1 - y0};
+}
+
 QRectF PlanView::toScreen(const Rect& r) const { return QRectF(toScreen(r.x0, r.y1), toScreen(r.x1, r.y0)); }
 
 QPointF PlanView::screenPointOn(const Handle& h) const {
@@ -213,8 +234,14 @@ std::optional<PlanView::Handle> PlanView::handleAt(const QPointF& screen) const 
 }
 
 void PlanView::mousePressEvent(QMouseEvent* event) {
-    if (!has_ || !problem_ || event->button() != Qt::LeftButton) return;
+    if (!has_ || event->button() != Qt::LeftButton) return;
     const QPointF at = event->position();
+    if (event->modifiers() & Qt::ShiftModifier) { // draw a cut-out
+        drag_ = Drag::Cutout;
+        cutFrom_ = cutTo_ = toPlan(at);
+        return;
+    }
+    if (!problem_) return;
     if (event->modifiers() & Qt::AltModifier) {
         const QString id = roomAt(at);
         if (id.isEmpty()) return;
@@ -235,6 +262,11 @@ void PlanView::mousePressEvent(QMouseEvent* event) {
 
 void PlanView::mouseMoveEvent(QMouseEvent* event) {
     const QPointF at = event->position();
+    if (drag_ == Drag::Cutout) {
+        cutTo_ = toPlan(at);
+        update();
+        return;
+    }
     if (drag_ == Drag::Wall) {
         const double s = pixelsPerUnit();
         const QPointF origin = toScreen(0, 0);
@@ -278,6 +310,12 @@ void PlanView::mouseMoveEvent(QMouseEvent* event) {
 void PlanView::mouseReleaseEvent(QMouseEvent*) {
     const Drag was = drag_;
     drag_ = Drag::None;
+    if (was == Drag::Cutout) {
+        update();
+        const Placement c = drawnCutout();
+        if (c.width > 0 && c.depth > 0) emit cutoutDrawn(c);
+        return;
+    }
     if (was == Drag::Wall) {
         bool moved = false;
         for (std::size_t i = 0; i < v_.rooms.size(); ++i)

@@ -73,6 +73,8 @@ signals:
     void lockToggled(int room);
     // Fix the room where it is (a placement) or free it (nullopt): a brief edit.
     void fixToggled(int room, std::optional<abut::Placement> at);
+    // A rectangle drawn with Shift+drag, to be cut out of the footprint (a brief edit).
+    void cutoutDrawn(const abut::Placement& cutout);
 
 protected:
     void paintEvent(QPaintEvent* event) override;
@@ -88,6 +90,8 @@ private:
     std::optional<Handle> handleAt(const QPointF& screen) const;
     QRectF planRect() const;
     QRectF toScreen(const Rect& r) const;
+    QPointF toPlan(const QPointF& screen) const; // clamped to the footprint
+    Placement drawnCutout() const;               // the cut-out being drawn, snapped (empty: too small)
 
     Brief brief_;
     Brief planned_; // brief_ as planned (targets grown with `surplus: spread`); the sizing problem refers to it
@@ -105,7 +109,8 @@ private:
     SizingResult state_; // segment positions of v_
     double grid_ = 0;
     // Drag state.
-    enum class Drag { None, Wall, Target } drag_ = Drag::None;
+    enum class Drag { None, Wall, Target, Cutout } drag_ = Drag::None;
+    QPointF cutFrom_, cutTo_; // a cut-out being drawn (Shift+drag), plan units
     Handle dragHandle_;
     int dragRoom_ = -1;
     double dragStartY_ = 0, dragStartArea_ = 0, dragArea_ = 0;

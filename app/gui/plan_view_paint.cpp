@@ -201,6 +201,19 @@ void PlanView::paintEvent(QPaintEvent*) {
         for (const auto& [x, y] : loop) poly << toScreen(x, y);
         p.drawPolygon(poly);
     }
+    // A cut-out being drawn (Shift+drag): its snapped rectangle, dashed.
+    if (drag_ == Drag::Cutout) {
+        const Placement c = drawnCutout();
+        if (c.width > 0) {
+            const QRectF box = toScreen(Rect{c.x, c.y, c.x + c.width, c.y + c.depth});
+            p.setPen(QPen(ink, 1.5, Qt::DashLine));
+            p.setBrush(QBrush(QColor(0x88, 0x88, 0x88), Qt::FDiagPattern));
+            p.drawRect(box);
+            p.setPen(ink);
+            p.drawText(box.adjusted(4, 2, -4, -2), Qt::AlignCenter,
+                       tr("cut out %1 × %2").arg(c.width, 0, 'f', 2).arg(c.depth, 0, 'f', 2));
+        }
+    }
     // Dropped adjacencies: a dashed line between the rooms, × in the middle.
     QStringList droppedText;
     for (int a : v_.dropped) {

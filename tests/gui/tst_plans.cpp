@@ -323,6 +323,18 @@ private slots:
         QCOMPARE(cut->text(), QStringLiteral("12 9 12 9; 0 16 3 2")); // put back
         undo->undo();
         QCOMPARE(w.brief().footprint->cutouts.size(), std::size_t(1));
+        // Shift+drag on the plan draws one, snapped to 5 cm and onto the footprint's edges.
+        PlanView* view = w.planView();
+        const QPoint from = view->toScreen(0.03, 0.03).toPoint(), to = view->toScreen(2.0, 1.5).toPoint();
+        QTest::mousePress(view, Qt::LeftButton, Qt::ShiftModifier, from);
+        QTest::mouseMove(view, to);
+        QTest::mouseRelease(view, Qt::LeftButton, Qt::ShiftModifier, to);
+        QCOMPARE(w.brief().footprint->cutouts.size(), std::size_t(2));
+        const Placement drawn = w.brief().footprint->cutouts[1];
+        QCOMPARE(drawn.x, 0.0);
+        QCOMPARE(drawn.y, 0.0);
+        QVERIFY(std::abs(drawn.width - 2.0) < 0.051 && std::abs(drawn.depth - 1.5) < 0.051);
+        QCOMPARE(undo->index(), before + 1);
     }
 
     void wallSnapsToPlanningGrid() {
