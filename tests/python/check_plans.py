@@ -1,9 +1,10 @@
 # SPDX-License-Identifier: MIT
 """Plan files written by `abut-cli plan`, checked independently with shapely
 (geometry) and networkx (graph facts): rooms and spare spaces tile the
-footprint with no overlap; every adjacency not listed in `dropped` is a
+footprint less its cut-outs (which the plan file repeats) with no overlap; every adjacency not listed in `dropped` is a
 shared wall of positive length (door kind: at least doorWidth); every facade
-wish is met unless the room is listed in `unmetFacade`; variants are sorted
+wish is met unless the room is listed in `unmetFacade` (a wall on a cut-out
+facing the side counts); variants are sorted
 best first. Briefs: the samples plus 1,000 seeded random briefs made here
 (random planar adjacency graphs, random facade wishes, door/wall and
 must/should mixes, some disconnected)."""
@@ -18,6 +19,9 @@ import tempfile
 import networkx as nx
 from shapely.geometry import box
 from shapely.ops import unary_union
+
+sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
+import plan_quality  # noqa: E402
 
 cli, samples_dir = sys.argv[1], sys.argv[2]
 count = int(sys.argv[3]) if len(sys.argv) > 3 else 1000
@@ -91,7 +95,14 @@ def check_all(jobs):
 def check(path, brief, plan):
     global checked
     fw, fd = plan["footprint"]["width"], plan["footprint"]["depth"]
+    cuts = [(c["x"], c["y"], c["x"] + c["width"], c["y"] + c["depth"]) for c in plan["footprint"].get("cutouts", [])]
+    def rects(fp):
+        return [(c["x"], c["y"], c["width"], c["depth"]) for c in fp.get("cutouts", [])]
+    if rects(brief.get("footprint", {})) != rects(plan["footprint"]):
+        failures.append(f"{path}: the plan file does not repeat the footprint's cut-outs")
     footprint = box(0, 0, fw, fd)
+    for c in cuts:
+        footprint = footprint.difference(box(*c))
     door = brief.get("doorWidth", 0.9)
     ids = [r["id"] for r in brief["rooms"]]
     scores = [v["score"] for v in plan["variants"]]
@@ -130,13 +141,12 @@ def check(path, brief, plan):
             if got < need - TOL:
                 failures.append(f"{where}: {pair} share {got:.4f}, need {need}")
         unmet = set(v["unmetFacade"])
-        edges = {"N": box(0, fd, fw, fd).buffer(TOL), "S": box(0, 0, fw, 0).buffer(TOL),
-                 "W": box(0, 0, 0, fd).buffer(TOL), "E": box(fw, 0, fw, fd).buffer(TOL)}
         for r in brief["rooms"]:
             if r["id"] in unmet:
                 continue
             for side in r.get("facade", []):
-                touches = [rooms[r["id"]].boundary.intersection(edges[s]).length > TOL for s in "NESW"]
+                rect = rooms[r["id"]].bounds
+                touches = [plan_quality.facade_length(rect, s, fw, fd, cuts) > TOL for s in "NESW"]
                 ok = any(touches) if side == "any" else touches["NESW".index(side)]
                 if not ok:
                     failures.append(f"{where}: {r['id']} misses facade {side}")
