@@ -45,7 +45,7 @@ struct SearchOptions {
     unsigned seed = 1;
     int threads = 0;            // worker threads and annealing chains (0 = every core)
     double timeLimit = 0;       // seconds (0 = none: the move budget ends the search)
-    long long moves = 0;        // moves per chain (0 = 200,000 + 60,000 per room; four times that with rooms fixed in place or cut-outs)
+    long long moves = 0;        // moves per chain (0 = 200,000 + 60,000 per room; twelve times that with rooms fixed in place or cut-outs)
     int keep = 10;              // distinct arrangements returned at most
     double anyWall = minContactLength; // m: shortest wall that counts as a contact
     double spareMinimum = minSpareSide; // m: smallest side of a spare space
