@@ -86,31 +86,53 @@ bool overlaps(const Placement& a, const Placement& b, double tolerance) {
     return w > tolerance && d > tolerance;
 }
 
-bool isConnected(const Footprint& fp) {
-    // Cells of the grid through every cut-out edge; the building's cells are
-    // joined through shared sides.
-    std::vector<double> xs{0.0, fp.width}, ys{0.0, fp.depth};
+namespace {
+
+// The grid through every cut-out edge: its lines, and per cell (i, j) at
+// index i·ny + j whether it is building.
+struct CellGrid {
+    std::vector<double> xs, ys;
+    int nx = 0, ny = 0;
+    std::vector<char> building;
+    bool at(int i, int j) const { return i >= 0 && j >= 0 && i < nx && j < ny && building[i * ny + j]; }
+};
+
+CellGrid cellGrid(const Footprint& fp) {
+    CellGrid g;
+    g.xs = {0.0, fp.width};
+    g.ys = {0.0, fp.depth};
     for (const Placement& c : fp.cutouts) {
-        xs.insert(xs.end(), {c.x, c.x + c.width});
-        ys.insert(ys.end(), {c.y, c.y + c.depth});
+        g.xs.insert(g.xs.end(), {c.x, c.x + c.width});
+        g.ys.insert(g.ys.end(), {c.y, c.y + c.depth});
     }
-    for (auto* v : {&xs, &ys}) {
+    for (auto* v : {&g.xs, &g.ys}) {
         std::sort(v->begin(), v->end());
         v->erase(std::unique(v->begin(), v->end()), v->end());
     }
-    const int nx = static_cast<int>(xs.size()) - 1, ny = static_cast<int>(ys.size()) - 1;
-    if (nx <= 0 || ny <= 0) return false;
-    std::vector<char> building(static_cast<std::size_t>(nx * ny), 1);
-    int count = 0, start = -1;
-    for (int i = 0; i < nx; ++i)
-        for (int j = 0; j < ny; ++j) {
-            const Placement cell{xs[i], ys[j], xs[i + 1] - xs[i], ys[j + 1] - ys[j]};
+    g.nx = std::max(0, static_cast<int>(g.xs.size()) - 1);
+    g.ny = std::max(0, static_cast<int>(g.ys.size()) - 1);
+    g.building.assign(static_cast<std::size_t>(g.nx * g.ny), 1);
+    for (int i = 0; i < g.nx; ++i)
+        for (int j = 0; j < g.ny; ++j) {
+            const Placement cell{g.xs[i], g.ys[j], g.xs[i + 1] - g.xs[i], g.ys[j + 1] - g.ys[j]};
             for (const Placement& c : fp.cutouts)
-                if (overlapArea(cell, c) > 0.5 * cell.area()) building[i * ny + j] = 0;
-            if (building[i * ny + j]) {
-                ++count;
-                start = i * ny + j;
-            }
+                if (overlapArea(cell, c) > 0.5 * cell.area()) g.building[i * g.ny + j] = 0;
+        }
+    return g;
+}
+
+} // namespace
+
+bool isConnected(const Footprint& fp) {
+    // The building's cells, joined through shared sides.
+    const CellGrid grid = cellGrid(fp);
+    const int nx = grid.nx, ny = grid.ny;
+    std::vector<char> building = grid.building;
+    int count = 0, start = -1;
+    for (int c = 0; c < nx * ny; ++c)
+        if (building[c]) {
+            ++count;
+            start = c;
         }
     if (count == 0) return false;
     std::vector<int> stack{start};
@@ -134,23 +156,11 @@ bool isConnected(const Footprint& fp) {
 }
 
 std::vector<OutlineLoop> footprintOutline(const Footprint& fp) {
-    std::vector<double> xs{0.0, fp.width}, ys{0.0, fp.depth};
-    for (const Placement& c : fp.cutouts) {
-        xs.insert(xs.end(), {c.x, c.x + c.width});
-        ys.insert(ys.end(), {c.y, c.y + c.depth});
-    }
-    for (auto* v : {&xs, &ys}) {
-        std::sort(v->begin(), v->end());
-        v->erase(std::unique(v->begin(), v->end()), v->end());
-    }
-    const int nx = static_cast<int>(xs.size()) - 1, ny = static_cast<int>(ys.size()) - 1;
-    auto building = [&](int i, int j) {
-        if (i < 0 || j < 0 || i >= nx || j >= ny) return false;
-        const Placement cell{xs[i], ys[j], xs[i + 1] - xs[i], ys[j + 1] - ys[j]};
-        for (const Placement& c : fp.cutouts)
-            if (overlapArea(cell, c) > 0.5 * cell.area()) return false;
-        return true;
-    };
+    const CellGrid grid = cellGrid(fp);
+    const std::vector<double>& xs = grid.xs;
+    const std::vector<double>& ys = grid.ys;
+    auto building = [&](int i, int j) { return grid.at(i, j); };
+    const int nx = grid.nx, ny = grid.ny;
     // Boundary edges between grid points (i, j), building on their left.
     std::map<std::pair<int, int>, std::vector<std::pair<int, int>>> next;
     for (int i = 0; i < nx; ++i)
