@@ -26,6 +26,7 @@ enum class DiagnosticCode {
     FixedOffTarget,     // a room fixed in place at an area off its target band
     OverFootprint,      // targets add up to more than the footprint
     WiderThanFootprint, // a room's minimum width exceeds the footprint
+    NoRectangleFits,    // a room larger than any rectangle beside the cut-outs and fixed rooms
     ShortDoorWall,      // door adjacencies with less than a door's width of wall
     SketchCrossing,     // adjacency lines that cross in the sketch
     Unmet,              // a requirement the plan on show does not meet

@@ -97,13 +97,16 @@ struct CellGrid {
     bool at(int i, int j) const { return i >= 0 && j >= 0 && i < nx && j < ny && building[i * ny + j]; }
 };
 
-CellGrid cellGrid(const Footprint& fp) {
+// `taken`: further rectangles that are not free (rooms fixed in place).
+CellGrid cellGrid(const Footprint& fp, const std::vector<Placement>& taken = {}) {
     CellGrid g;
     g.xs = {0.0, fp.width};
     g.ys = {0.0, fp.depth};
-    for (const Placement& c : fp.cutouts) {
-        g.xs.insert(g.xs.end(), {c.x, c.x + c.width});
-        g.ys.insert(g.ys.end(), {c.y, c.y + c.depth});
+    std::vector<Placement> blocked = fp.cutouts;
+    blocked.insert(blocked.end(), taken.begin(), taken.end());
+    for (const Placement& c : blocked) {
+        g.xs.insert(g.xs.end(), {std::clamp(c.x, 0.0, fp.width), std::clamp(c.x + c.width, 0.0, fp.width)});
+        g.ys.insert(g.ys.end(), {std::clamp(c.y, 0.0, fp.depth), std::clamp(c.y + c.depth, 0.0, fp.depth)});
     }
     for (auto* v : {&g.xs, &g.ys}) {
         std::sort(v->begin(), v->end());
@@ -115,13 +118,39 @@ CellGrid cellGrid(const Footprint& fp) {
     for (int i = 0; i < g.nx; ++i)
         for (int j = 0; j < g.ny; ++j) {
             const Placement cell{g.xs[i], g.ys[j], g.xs[i + 1] - g.xs[i], g.ys[j + 1] - g.ys[j]};
-            for (const Placement& c : fp.cutouts)
+            for (const Placement& c : blocked)
                 if (overlapArea(cell, c) > 0.5 * cell.area()) g.building[i * g.ny + j] = 0;
         }
     return g;
 }
 
 } // namespace
+
+Placement largestFreeRectangle(const Footprint& fp, const std::vector<Placement>& taken) {
+    // Largest rectangle under a histogram, row by row: heights[i] is how far
+    // free cells reach down from the current row in column i; a stack of
+    // rising heights gives every maximal rectangle once (widths weighted).
+    const CellGrid g = cellGrid(fp, taken);
+    Placement best;
+    std::vector<double> height(static_cast<std::size_t>(g.nx), 0.0);
+    for (int j = 0; j < g.ny; ++j) {
+        const double top = g.ys[j + 1];
+        for (int i = 0; i < g.nx; ++i) height[i] = g.at(i, j) ? height[i] + (g.ys[j + 1] - g.ys[j]) : 0.0;
+        std::vector<int> stack; // column indices, heights rising
+        for (int i = 0; i <= g.nx; ++i) {
+            const double h = i < g.nx ? height[i] : 0.0;
+            while (!stack.empty() && height[stack.back()] >= h) {
+                const double hh = height[stack.back()];
+                stack.pop_back();
+                const double x0 = stack.empty() ? g.xs[0] : g.xs[stack.back() + 1];
+                const double x1 = g.xs[i];
+                if (hh * (x1 - x0) > best.area()) best = {x0, top - hh, x1 - x0, hh};
+            }
+            stack.push_back(i);
+        }
+    }
+    return best;
+}
 
 bool isConnected(const Footprint& fp) {
     // The building's cells, joined through shared sides.

@@ -130,6 +130,11 @@ bool overlaps(const Placement& a, const Placement& b, double tolerance);
 // corner only are two). O(c³) for c cut-outs.
 bool isConnected(const Footprint& fp);
 
+// The largest rectangle inside the footprint that overlaps none of its
+// cut-outs nor any rectangle of `taken` (rooms fixed in place): the largest
+// room that can stand beside them. O(c²) cells for c rectangles.
+Placement largestFreeRectangle(const Footprint& fp, const std::vector<Placement>& taken = {});
+
 // The outline of the footprint minus its cut-outs, as closed loops of
 // corners: the outer loop counter-clockwise first, then one clockwise loop
 // per courtyard. Without cut-outs, the bounding rectangle. O(c²) cells.

@@ -45,6 +45,33 @@ std::vector<Diagnostic> footprintProblems(const Brief& brief) {
             out.push_back(d);
         }
     }
+    // Every room is a rectangle beside the cut-outs and the rooms fixed in
+    // place: one that cannot be as small as its band allows in the largest
+    // such rectangle has no plan (it would have to be L-shaped).
+    std::vector<Placement> taken;
+    for (const Room& room : brief.rooms)
+        if (room.fixed && !room.cutout) taken.push_back(*room.fixed);
+    if (!fp.cutouts.empty() || !taken.empty()) {
+        const Placement free = largestFreeRectangle(fp, taken);
+        for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
+            const Room& room = brief.rooms[i];
+            if (room.fixed || room.cutout) continue;
+            const double least = room.area * (1 - room.tolerance());
+            if (least <= free.area() * (1 + 1e-9)) continue;
+            Diagnostic d;
+            d.severity = Severity::Error;
+            d.code = DiagnosticCode::NoRectangleFits;
+            d.message = room.displayName() + " needs at least " + formatNumber(std::round(least * 100) / 100) + " " +
+                        u + "\xC2\xB2 (its target less its band), but the largest rectangle beside the " +
+                        (taken.empty() ? "cut-outs" : fp.cutouts.empty() ? "fixed rooms" : "cut-outs and fixed rooms") +
+                        " is " + formatNumber(std::round(free.area() * 100) / 100) + " " + u + "\xC2\xB2 (" +
+                        formatNumber(free.width) + " \xC3\x97 " + formatNumber(free.depth) + " " + u +
+                        "): it would have to be L-shaped. Lower its target, move or free a fixed room, or change the "
+                        "cut-outs.";
+            d.rooms = {static_cast<int>(i)};
+            out.push_back(d);
+        }
+    }
     // Rooms that wish one side only all need a stretch of that facade at
     // least their minimum width long (a room wider than its minimum on the
     // facade is fine; narrower is not).

@@ -79,11 +79,26 @@ BriefCheck arrangementCheck(const Brief& brief, const BriefCheckOptions& options
     return out;
 }
 
+// The planned brief's notes as notes on the brief as written: cut-outs are
+// rooms of the planned brief (indices past the brief's own), never named to
+// the planner. A contact with a cut-out is an exterior wall, not an added one.
+void speakOfTheBrief(std::size_t rooms, AugmentResult& aug) {
+    const auto isCutout = [&](int r) { return r < 0 || static_cast<std::size_t>(r) >= rooms; };
+    std::erase_if(aug.diagnostics, [&](const Diagnostic& d) {
+        const bool touchesCutout = std::any_of(d.rooms.begin(), d.rooms.end(), isCutout);
+        const bool onlyCutouts = !d.rooms.empty() && std::all_of(d.rooms.begin(), d.rooms.end(), isCutout);
+        return onlyCutouts || (touchesCutout && d.code == DiagnosticCode::AddedContact);
+    });
+    for (Diagnostic& d : aug.diagnostics) std::erase_if(d.rooms, isCutout);
+    std::erase_if(aug.unmetFacade, isCutout);
+}
+
 } // namespace
 
 BriefCheck checkBrief(const Brief& brief, const BriefCheckOptions& options) {
     // Planned as buildPlan plans it: cut-outs as blocks held in place.
     BriefCheck out = arrangementCheck(plannedBrief(brief), options);
+    speakOfTheBrief(brief.rooms.size(), out.arrangement);
     out.diagnostics = footprintProblems(brief);
     out.fits = std::none_of(out.diagnostics.begin(), out.diagnostics.end(),
                             [](const Diagnostic& d) { return d.severity == Severity::Error; });

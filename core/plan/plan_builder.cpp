@@ -2,6 +2,7 @@
 #include "plan/plan_builder.h"
 
 #include "plan/graph_first.h"
+#include "brief/footprint_check.h"
 #include "plan/relaxations.h"
 #include "plan/variant_key.h"
 
@@ -319,6 +320,32 @@ SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options) 
     return s;
 }
 
+namespace {
+
+// Why no variant was kept when every one moved a fixed room or put a room on
+// a cut-out: the rooms and cut-outs most often out of place, by name.
+std::string heldPlacesSummary(const Brief& given, const std::vector<int>& away, std::size_t tried) {
+    std::vector<std::string> rooms;
+    bool cutouts = false;
+    for (std::size_t i = 0; i < away.size(); ++i) {
+        if (away[i] == 0) continue;
+        if (i >= given.rooms.size()) cutouts = true;
+        else rooms.push_back(given.rooms[i].displayName());
+    }
+    std::string list;
+    for (std::size_t k = 0; k < rooms.size() && k < 4; ++k) list += (k ? ", " : "") + rooms[k];
+    if (rooms.size() > 4) list += " and " + std::to_string(rooms.size() - 4) + " more";
+    std::string what = !rooms.empty() ? "holds " + list + " where " + (rooms.size() == 1 ? "it is" : "they are") + " fixed"
+                                      : std::string("keeps the footprint's cut-outs clear");
+    if (!rooms.empty() && cutouts) what += " and keeps the cut-outs clear";
+    return "No rectangular plan found " + what + " (" + std::to_string(tried) +
+           " variant(s) tried): the other rooms do not fill the space round them as rectangles in the time given. "
+           "Try a longer time limit, free a fixed room, or check the fixed places and cut-outs against the rooms' "
+           "minimum widths.";
+}
+
+} // namespace
+
 Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor* monitor) {
     const Brief brief = plannedBrief(given); // `surplus: spread` grows the targets to fill the footprint
     Plan plan;
@@ -333,6 +360,14 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
     };
     plan.units = brief.units;
     plan.footprint = brief.effectiveFootprint();
+    // A room no rectangle beside the cut-outs and fixed rooms can hold: proven, nothing to search.
+    for (const Diagnostic& d : footprintProblems(given))
+        if (d.code == DiagnosticCode::NoRectangleFits) {
+            plan.status = PlanStatus::NoPlan;
+            plan.summary = "No rectangular plan exists: " + d.message;
+            plan.diagnostics.push_back(d);
+            return plan;
+        }
     AugmentOptions augment;
     augment.poleRouteGraphs = std::max(1, options.augmentations);
     const AugmentResult aug = buildExtendedGraph(brief, augment);
@@ -407,19 +442,23 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
                                    : aug.summary;
         return plan;
     }
-    // A variant with a room on a cut-out is no plan of this building.
+    // A variant with a room on a cut-out, or a fixed room moved, is no plan
+    // of this building: a fixed room stays exactly where it is fixed.
     const double tol = 1e-6 * std::max(plan.footprint.width, plan.footprint.depth);
     const std::size_t before = plan.variants.size();
+    std::vector<int> away(brief.rooms.size(), 0);
     std::erase_if(plan.variants, [&](const PlanVariant& v) {
+        bool moved = false;
         for (std::size_t i = 0; i < brief.rooms.size() && i < v.rooms.size(); ++i)
-            if (brief.rooms[i].cutout && !inPlace(brief.rooms[i], v.rooms[i], tol)) return true;
-        return false;
+            if (brief.rooms[i].fixed && !inPlace(brief.rooms[i], v.rooms[i], tol)) {
+                ++away[i];
+                moved = true;
+            }
+        return moved;
     });
     if (plan.variants.empty()) {
         plan.status = stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
-        plan.summary = "No variant found keeps the footprint's cut-outs clear (" + std::to_string(before) +
-                       " tried): the rooms do not fit round them in the time given; try a longer time limit, or "
-                       "check the cut-outs against the rooms' minimum widths.";
+        plan.summary = heldPlacesSummary(given, away, before);
         return plan;
     }
     rankVariants(brief, plan.footprint, plan.variants);

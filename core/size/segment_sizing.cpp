@@ -233,6 +233,12 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
             flag[seg] = 1;
             pinned.at(axisX, seg) = value;
         };
+        // The outline stays where it is: a fixed room whose side lies on it
+        // in this layout but is fixed elsewhere cannot be held here.
+        pin(true, s.westSegment, 0);
+        pin(true, s.eastSegment, W);
+        pin(false, s.southSegment, 0);
+        pin(false, s.northSegment, D);
         for (int v = 0; v < static_cast<int>(brief_.rooms.size()) && v < x_.graph.vertexCount(); ++v) {
             if (!x_.isRoom(v) || !brief_.rooms[v].fixed) continue;
             const Placement& f = *brief_.rooms[v].fixed;

@@ -68,6 +68,64 @@ private slots:
         QVERIFY(isConnected(Footprint{10, 10, {{0, 6, 4, 4}, {6, 0, 4, 4}}}));
     }
 
+    void largestRectangleBesideCutOutsAndFixedRooms() {
+        // Worked by hand: a 10 × 8 footprint less a 3 × 3 corner holds at most
+        // 7 × 8 = 56 (beside it) or 10 × 5 = 50 (above it).
+        const Footprint fp{10, 8, {}};
+        const Placement l = largestFreeRectangle(fp, {{0, 0, 3, 3}});
+        QCOMPARE(l.area(), 56.0);
+        QCOMPARE(l.x, 3.0);
+        QCOMPARE(l.width, 7.0);
+        // A courtyard 6..14 × 5..11 in 20 × 16: the widest band is 20 × 5 south of it.
+        QCOMPARE(largestFreeRectangle(Footprint{20, 16, {{6, 5, 8, 6}}}).area(), 100.0);
+        // Nothing taken: the footprint itself.
+        QCOMPARE(largestFreeRectangle(fp).area(), 80.0);
+    }
+
+    void roomThatWouldBeLShapedHasNoPlan() {
+        // Room A fixed in a corner, B must take the rest: B would be an L,
+        // so no rectangular plan exists (a proof, not a search that gave up).
+        Brief b;
+        b.footprint = Footprint{10, 8, {}};
+        Room a{"A", "A", 9};
+        a.fixed = Placement{0, 0, 3, 3};
+        b.rooms = {a, Room{"B", "B", 71}};
+        b.adjacencies.push_back(Adjacency{"A", "B"});
+        const std::vector<Diagnostic> problems = footprintProblems(b);
+        QVERIFY(std::any_of(problems.begin(), problems.end(), [](const Diagnostic& d) {
+            return d.code == DiagnosticCode::NoRectangleFits && d.rooms == std::vector<int>{1} &&
+                   d.message.find("L-shaped") != std::string::npos;
+        }));
+        PlanOptions o;
+        o.threads = 1;
+        o.timeLimit = 2;
+        const Plan p = buildPlan(b, o);
+        QCOMPARE(p.status, PlanStatus::NoPlan);
+        QVERIFY(p.variants.empty());
+        QVERIFY(p.summary.find("L-shaped") != std::string::npos);
+    }
+
+    void fixedRoomOnTheOutlineIsHeldOrNoPlan() {
+        // Three rooms with one fixed across the footprint: every variant
+        // kept holds it exactly; the sizer never moves the outline for it.
+        Brief b;
+        b.footprint = Footprint{12, 8, {}};
+        Room f{"F", "Fixed", 8};
+        f.fixed = Placement{4.5, 0, 1, 8};
+        b.rooms = {f, Room{"W", "West", 36}, Room{"E", "East", 52}};
+        b.adjacencies = {Adjacency{"F", "W"}, Adjacency{"F", "E"}};
+        PlanOptions o;
+        o.threads = 1;
+        o.timeLimit = 3;
+        const Plan p = buildPlan(b, o);
+        QVERIFY(p.status != PlanStatus::Internal);
+        QVERIFY(!p.variants.empty()); // 4.5 × 8, 1 × 8 and 6.5 × 8 side by side meet it exactly
+        for (const PlanVariant& v : p.variants) {
+            QVERIFY(inPlace(b.rooms[0], v.rooms[0], 1e-6));
+            QVERIFY(checkVariant(plannedBrief(b), p.footprint, v).ok);
+        }
+    }
+
     void wallOnACutOutIsAFacade() {
         // A room just south of a cut-out faces north there; one beside it faces east.
         Brief b = twoRooms(10, 8);

@@ -15,7 +15,12 @@ py_hostile_input):
   rounded to 6 decimals) is accepted by check and plan;
 - a folder given as the project is named as a folder;
 - a brief without rooms: check and plan agree (exit 3);
-- a control character in a name is refused with the field named.
+- a control character in a name is refused with the field named;
+- cut-outs: check --json names only the brief's rooms (it crashed on two
+  cut-outs meeting edge to edge and on a comb of 200);
+- fixed rooms: a room that would have to be L-shaped beside a fixed one gets
+  no plan with that reason (exit 3, not an internal error), and on small
+  random briefs every variant holds its fixed rooms exactly (shapely tiles).
 
     /usr/bin/python3 tests/python/check_hostile.py ABUT_CLI
 """
@@ -158,6 +163,81 @@ with tempfile.TemporaryDirectory() as tmp:
     r = run("check", f)
     expect(r.returncode == 2 and "/rooms/0/name" in r.stderr and "control character" in r.stderr,
            f"control character: {r.returncode} {r.stderr!r}")
+
+    # Cut-outs and fixed rooms (round three): check --json on cut-outs names
+    # only the brief's rooms, and a fixed room is held exactly or no plan is
+    # given (exit 3, never an internal error).
+    def with_footprint(rooms, w, d, cutouts=(), adjacencies=()):
+        b = brief(rooms, (w, d), adjacencies)
+        b["footprint"]["cutouts"] = [{"x": x, "y": y, "width": cw, "depth": cd} for x, y, cw, cd in cutouts]
+        return b
+
+    f = path("two-cutouts.abut.json")
+    json.dump(with_footprint([{"id": "a", "area": 25, "facade": ["N"]}, {"id": "b", "area": 25},
+                              {"id": "c", "area": 25, "facade": ["E"]}], 10, 10,
+                             [(5, 5, 5, 2.5), (5, 7.5, 5, 2.5)], [("a", "b"), ("b", "c")]), open(f, "w"))
+    r = run("check", "--json", f)
+    expect(r.returncode == 0, f"check --json, two cut-outs edge to edge: exit {r.returncode} {r.stderr[-200:]}")
+    if r.returncode in (0, 3):
+        out = json.loads(r.stdout)
+        named = {i for d in out["diagnostics"] for i in d["rooms"]} | set(out["unmetFacade"])
+        expect(named <= {"a", "b", "c"}, f"check --json names rooms that are not the brief's: {named}")
+    comb = [(0.5 + k, 5, 0.5, 5) for k in range(200)]
+    f = path("comb.abut.json")
+    json.dump(with_footprint([{"id": f"r{i}", "area": 151} for i in range(10)], 201, 10, comb), open(f, "w"))
+    r = run("check", "--json", f)
+    expect(r.returncode in (0, 3), f"check --json, 200 cut-outs in a comb: exit {r.returncode} {r.stderr[-200:]}")
+    if r.returncode in (0, 3):
+        json.loads(r.stdout)
+
+    # A room beside a fixed one that would have to be L-shaped: no plan, with the reason.
+    f = path("l-shaped-room.abut.json")
+    json.dump(brief([{"id": "A", "area": 9, "fixed": {"x": 0, "y": 0, "width": 3, "depth": 3}},
+                     {"id": "B", "area": 71}], (10, 8), [("A", "B")]), open(f, "w"))
+    for cmd in (["plan", f, "-o", path("l.plan.json")], ["export", f, "-o", path("l.dxf")], ["check", f]):
+        r = run(*cmd)
+        expect(r.returncode == 3 and "L-shaped" in r.stdout + r.stderr,
+               f"{cmd[0]} with a room that would be L-shaped: exit {r.returncode} {(r.stdout + r.stderr)[-300:]}")
+
+    # Small random briefs with fixed rooms (seeded): never an internal error;
+    # every variant written holds every fixed room exactly where it is fixed.
+    import random
+    from shapely.geometry import box
+    from shapely.ops import unary_union
+    rng = random.Random(7)
+    for k in range(30):
+        W, D = rng.choice([8, 10, 12]), rng.choice([6, 8, 10])
+        fixed = []
+        for _ in range(rng.choice([1, 2])):
+            for _ in range(50):
+                w, d = rng.choice([1, 2, 3]), rng.choice([1, 2, 3])
+                x, y = rng.randrange(0, 2 * (W - w) + 1) / 2, rng.randrange(0, 2 * (D - d) + 1) / 2
+                if all(x + w <= g[0] or g[0] + g[2] <= x or y + d <= g[1] or g[1] + g[3] <= y for g in fixed):
+                    fixed.append((x, y, w, d))
+                    break
+        rooms = [{"id": f"F{i}", "area": w * d, "fixed": {"x": x, "y": y, "width": w, "depth": d}}
+                 for i, (x, y, w, d) in enumerate(fixed)]
+        rest = W * D - sum(g[2] * g[3] for g in fixed)
+        parts = [rng.uniform(1, 3) for _ in range(rng.randint(2, 6))]
+        rooms += [{"id": f"R{i}", "area": round(rest * p / sum(parts), 2)} for i, p in enumerate(parts)]
+        ids = [rm["id"] for rm in rooms]
+        f = path(f"fixed{k}.abut.json")
+        json.dump(brief(rooms, (W, D), [(ids[i], ids[i + 1]) for i in range(len(ids) - 1)]), open(f, "w"))
+        out = path(f"fixed{k}.plan.json")
+        r = run("plan", f, "-o", out, "--time-limit", "2", "--threads", "1")
+        expect(r.returncode in (0, 3), f"fixed rooms, brief {k}: exit {r.returncode} {r.stderr[-200:]}")
+        if r.returncode != 0:
+            continue
+        for v in json.load(open(out))["variants"]:
+            placed = {rm["id"]: rm for rm in v["rooms"]}
+            for rm in rooms:
+                if "fixed" in rm:
+                    g, p = rm["fixed"], placed[rm["id"]]
+                    off = max(abs(p[key] - g[key]) for key in ("x", "y", "width", "depth"))
+                    expect(off <= 1e-6, f"fixed rooms, brief {k}, variant {v['rank']}: {rm['id']} moved by {off}")
+            tiles = [box(t["x"], t["y"], t["x"] + t["width"], t["y"] + t["depth"]) for t in v["rooms"] + v["spaces"]]
+            expect(abs(unary_union(tiles).area - W * D) < 1e-6 * W * D and abs(sum(t.area for t in tiles) - W * D) < 1e-6 * W * D,
+                   f"fixed rooms, brief {k}, variant {v['rank']}: the rooms do not tile the footprint")
 
 print(f"{len(failures)} failure(s)")
 sys.exit(1 if failures else 0)
