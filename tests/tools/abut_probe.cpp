@@ -3,12 +3,15 @@
 // that Python checks can compare Abut's core with independent libraries.
 //   abut_probe planar   < {"graphs": [{"n": 5, "edges": [[0, 1], ...]}, ...]}
 //                       > [true, false, ...]
+//   abut_probe search PROJECT …, abut_probe fingerprint MOVES PROJECT… (below)
 #include "embed/planar_embedding.h"
 #include "io/project_io.h"
+#include "plan/plan_builder.h"
 #include "search/plan_search.h"
 
 #include <nlohmann/json.hpp>
 
+#include <cmath>
 #include <cstdlib>
 #include <fstream>
 #include <iostream>
@@ -53,9 +56,55 @@ int search(int argc, char** argv) {
     return 0;
 }
 
+// abut_probe fingerprint MOVES PROJECT...: plans each brief on one thread
+// with seed 1, a fixed move budget and no time limit (so the result depends
+// on nothing but the code), and prints one line per brief: the file, a hash
+// of its variants (rectangles to 1e-6, dropped adjacencies) and the best
+// variant's misses. A refactoring that keeps behaviour keeps every line.
+int fingerprint(int argc, char** argv) {
+    const long long moves = std::stoll(argv[2]);
+    for (int k = 3; k < argc; ++k) {
+        const abut::LoadResult loaded = abut::loadProject(argv[k]);
+        if (!loaded.ok()) {
+            std::cout << argv[k] << " unreadable\n";
+            continue;
+        }
+        abut::PlanOptions o;
+        o.threads = 1;
+        o.seed = 1;
+        o.searchMoves = moves;
+        o.flipBudget = 200;
+        o.relaxations = false; // bounded by the clock
+        const abut::Plan plan = abut::buildPlan(loaded.brief, o);
+        std::uint64_t h = 1469598103934665603ULL;
+        auto mix = [&](long long v) {
+            for (int b = 0; b < 8; ++b) {
+                h ^= (static_cast<unsigned long long>(v) >> (8 * b)) & 0xFF;
+                h *= 1099511628211ULL;
+            }
+        };
+        for (const abut::PlanVariant& v : plan.variants) {
+            for (const auto* list : {&v.rooms, &v.spaces})
+                for (const abut::Rect& r : *list)
+                    for (double c : {r.x0, r.y0, r.x1, r.y1}) mix(std::llround(c * 1e6));
+            for (int d : v.dropped) mix(d);
+        }
+        std::cout << argv[k] << " " << std::hex << h << std::dec << " " << abut::toString(plan.status) << " "
+                  << plan.variants.size();
+        if (!plan.variants.empty()) {
+            const abut::RequirementMisses& m = plan.variants.front().misses;
+            std::cout << " area " << m.area << " width " << m.minWidth << " aspect " << m.maxAspect << " must "
+                      << m.must << " facade " << m.facade << " fixed " << m.fixed;
+        }
+        std::cout << "\n";
+    }
+    return 0;
+}
+
 int main(int argc, char** argv) {
     const std::string mode = argc > 1 ? argv[1] : "";
     if (mode == "search" && argc > 2) return search(argc, argv);
+    if (mode == "fingerprint" && argc > 3) return fingerprint(argc, argv);
     if (mode != "planar") {
         std::cerr << "usage: abut_probe planar < graphs.json\n";
         return 2;
