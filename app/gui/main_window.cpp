@@ -268,25 +268,13 @@ void MainWindow::showDiagnostics() {
             if (u.adjacency >= 0) d.adjacencies = {u.adjacency};
             all.push_back(d);
         }
-        // The rooms a relaxation changes (a room's field, an adjacency's two rooms).
-        auto relaxationRooms = [&](const Relaxation& r) {
-            std::vector<int> rooms;
-            int k = -1;
-            if (std::sscanf(r.field.c_str(), "/rooms/%d", &k) == 1 && k >= 0 && k < int(planBrief_.rooms.size()))
-                rooms.push_back(k);
-            else if (std::sscanf(r.field.c_str(), "/adjacencies/%d", &k) == 1 && k >= 0 &&
-                     k < int(planBrief_.adjacencies.size()))
-                for (const std::string& id : {planBrief_.adjacencies[k].a, planBrief_.adjacencies[k].b})
-                    if (const int i = planBrief_.roomIndex(id); i >= 0) rooms.push_back(i);
-            return rooms;
-        };
         for (const Relaxation& r : current_.relaxations)
             all.push_back({Severity::Info, DiagnosticCode::Relaxation,
                            tr("Would meet \u201c%1\u201d%3: %2")
                                .arg(QString::fromStdString(r.meets.front()), QString::fromStdString(r.text),
                                     r.meets.size() > 1 ? tr(" and %n more", nullptr, int(r.meets.size() - 1)) : QString())
                                .toStdString(),
-                           relaxationRooms(r), {}});
+                           r.rooms, r.adjacency >= 0 ? std::vector<int>{r.adjacency} : std::vector<int>{}});
     }
     for (const Diagnostic& d : all) {
         const QString prefix = d.severity == Severity::Error     ? tr("Problem: ")

@@ -51,7 +51,7 @@ void PlanView::setVariant(const Brief& brief, const Footprint& footprint, const 
                 lines << tr("  held there by %1").arg(QString::fromStdString(h));
             QString first;
             for (const Relaxation& r : v_.relaxations)
-                if (std::find(r.meets.begin(), r.meets.end(), u.text) != r.meets.end()) {
+                if (std::find(r.meetsKeys.begin(), r.meetsKeys.end(), u.key()) != r.meetsKeys.end()) {
                     lines << tr("  would be met by: %1").arg(QString::fromStdString(r.text));
                     if (first.isEmpty()) first = QString::fromStdString(r.text);
                 }

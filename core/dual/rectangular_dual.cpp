@@ -61,6 +61,18 @@ std::vector<double> longestPaths(int count, const std::vector<std::pair<std::pai
     return dist;
 }
 
+double sharedWallLength(const Rect& a, const Rect& b, double tol) {
+    const double ox = std::min(a.x1, b.x1) - std::max(a.x0, b.x0);
+    const double oy = std::min(a.y1, b.y1) - std::max(a.y0, b.y0);
+    if ((std::abs(a.x1 - b.x0) <= tol || std::abs(b.x1 - a.x0) <= tol) && oy > tol) return oy;
+    if ((std::abs(a.y1 - b.y0) <= tol || std::abs(b.y1 - a.y0) <= tol) && ox > tol) return ox;
+    return 0.0;
+}
+
+bool interiorsOverlap(const Rect& a, const Rect& b, double tol) {
+    return std::min(a.x1, b.x1) - std::max(a.x0, b.x0) > tol && std::min(a.y1, b.y1) - std::max(a.y0, b.y0) > tol;
+}
+
 SegmentStructure maximalSegments(const ExtendedGraph& x, const RegularEdgeLabeling& rel) {
     const PlaneGraph& g = x.graph;
     const int n = g.vertexCount();

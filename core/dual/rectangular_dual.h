@@ -34,6 +34,12 @@ struct Rect {
     double area() const { return width() * depth(); }
 };
 
+// Length of the wall two rectangles share (0 when they only meet at a corner
+// or not at all); sides closer than `tolerance` count as one line. O(1).
+double sharedWallLength(const Rect& a, const Rect& b, double tolerance = 1e-9);
+// Whether their interiors overlap by more than `tolerance` both ways. O(1).
+bool interiorsOverlap(const Rect& a, const Rect& b, double tolerance);
+
 // The combinatorial layout: which maximal segment each side of each vertex
 // lies on. Poles included (W's east side is segment westSegment, ...).
 struct SegmentStructure {

@@ -61,13 +61,13 @@ std::string serializePlan(const Brief& brief, const Plan& plan) {
         vj["unmetFacade"] = unmet;
         OrderedJson notMet = OrderedJson::array();
         for (const UnmetItem& u : unmetRequirements(brief, plan.footprint, v)) {
-            OrderedJson item = {{"requirement", u.requirement}, {"field", u.field}};
+            OrderedJson item = {{"requirement", toString(u.kind)}, {"field", u.field}};
             OrderedJson ids = OrderedJson::array();
             for (int r : u.rooms) ids.push_back(brief.rooms[r].id);
             item["rooms"] = ids;
-            if (u.requirement != "facade") {
-                item["target"] = tidy(u.wanted);
-                item["achieved"] = tidy(u.got);
+            if (u.kind != RequirementKind::Facade) {
+                item["target"] = tidy(u.target);
+                item["achieved"] = tidy(u.achieved);
             }
             item["text"] = u.text;
             if (const std::vector<std::string> held = heldBy(u, v.relaxations); !held.empty()) item["heldBy"] = held;

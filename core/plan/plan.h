@@ -32,7 +32,10 @@ struct Relaxation {
     std::string from, to;           // JSON values: the field now, and as suggested
     std::string text;               // one line in the planner's words
     std::string holds;              // the requirement it relaxes, as it stands, e.g. "Store's minimum width of 1.8 m"
-    std::vector<std::string> meets; // the requirements it meets (UnmetItem texts)
+    std::vector<std::string> meets; // the requirements it meets (UnmetItem texts, as the plan file lists them)
+    std::vector<std::string> meetsKeys; // the same as UnmetItem::key(), to find them
+    std::vector<int> rooms;         // brief room indices the change concerns (none for the footprint)
+    int adjacency = -1;             // the brief adjacency it gives up, or −1
     double change = 0;              // relative size of the change (for ranking; giving up counts 1)
 };
 
@@ -45,7 +48,6 @@ struct PlanVariant {
     std::vector<int> unmetFacade; // rooms that miss a facade side they wish for
     bool oneSided = false;        // area-universal: any area targets can be met exactly
     bool sized = false;           // segment positions chosen by the sizer (not just fitted)
-    std::vector<UnmetRequirement> unmet; // what the sizer could not meet, and by how much
     RequirementMisses misses;            // what keeps it from being usable (none: usable)
     std::vector<Relaxation> relaxations; // what must give (the best variant only; see plan/relaxations.h)
     PlanMetrics metrics;

@@ -32,67 +32,35 @@ const char* toString(PlanStatus s) {
 
 namespace {
 
-double sharedWall(const Rect& a, const Rect& b, double tol = 1e-9) {
-    const double ox = std::min(a.x1, b.x1) - std::max(a.x0, b.x0);
-    const double oy = std::min(a.y1, b.y1) - std::max(a.y0, b.y0);
-    if ((std::abs(a.x1 - b.x0) < tol || std::abs(b.x1 - a.x0) < tol) && oy > tol) return oy;
-    if ((std::abs(a.y1 - b.y0) < tol || std::abs(b.y1 - a.y0) < tol) && ox > tol) return ox;
-    return 0.0;
-}
-
-} // namespace
-
-namespace {
-
 // Area errors, aspects, door walls, facade wishes and score of a variant whose
-// rectangles are set. Door walls shorter than doorWidth are listed as dropped.
-void updateMetrics(const Brief& brief, const Footprint& fp, const ExtendedGraph& x, PlanVariant& out) {
+// rectangles are set, all from the one measure (search/requirements.h): an
+// adjacency without its wall (a door: without a door-wide one) is dropped.
+void updateMetrics(const Brief& brief, const Footprint& fp, PlanVariant& out, const Thresholds& t) {
+    const RequirementReport report = measureRequirements(brief, fp, out.rooms, t);
     PlanMetrics m;
-    out.dropped.clear();
-    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a)
-        if (!x.graph.hasEdge(brief.roomIndex(brief.adjacencies[a].a), brief.roomIndex(brief.adjacencies[a].b)))
-            out.dropped.push_back(static_cast<int>(a));
-    double sumErr = 0;
-    for (std::size_t i = 0; i < out.rooms.size(); ++i) {
+    m.worstAreaError = report.counts.worstAreaError;
+    m.meanAreaError = report.meanAreaError;
+    m.narrowRooms = report.counts.minWidth;
+    for (std::size_t i = 0; i < out.rooms.size() && i < brief.rooms.size(); ++i) {
+        if (brief.rooms[i].cutout) continue;
         const Rect& r = out.rooms[i];
-        const double err = std::abs(r.area() - brief.rooms[i].area) / brief.rooms[i].area;
-        m.worstAreaError = std::max(m.worstAreaError, err);
-        sumErr += err;
         m.worstAspect = std::max(m.worstAspect, std::max(r.width(), r.depth()) / std::min(r.width(), r.depth()));
-        if (brief.rooms[i].minWidth && std::min(r.width(), r.depth()) < *brief.rooms[i].minWidth - 1e-9)
-            ++m.narrowRooms;
     }
-    m.meanAreaError = out.rooms.empty() ? 0 : sumErr / out.rooms.size();
     for (const Rect& r : out.spaces) m.spareArea += r.area();
-    for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
-        const Adjacency& adj = brief.adjacencies[a];
-        if (adj.kind != AdjacencyKind::Door) continue;
-        if (std::count(out.dropped.begin(), out.dropped.end(), static_cast<int>(a))) continue;
-        const double wall = sharedWall(out.rooms[brief.roomIndex(adj.a)], out.rooms[brief.roomIndex(adj.b)]);
-        if (wall < brief.doorWidth - 1e-9) {
-            ++m.shortDoorWalls;
-            out.dropped.push_back(static_cast<int>(a));
+    out.dropped.clear();
+    out.unmetFacade.clear();
+    const double tol = lineTolerance(fp, t);
+    for (const Miss& miss : report.misses) {
+        if (miss.adjacency >= 0) {
+            out.dropped.push_back(miss.adjacency);
+            if (miss.kind == RequirementKind::Door && miss.achieved > tol) ++m.shortDoorWalls;
+        } else if (miss.kind == RequirementKind::Facade) {
+            out.unmetFacade.push_back(miss.room);
         }
     }
     std::sort(out.dropped.begin(), out.dropped.end());
-    out.unmetFacade.clear();
-    // With cut-outs a facade is also a wall on a cut-out: measured on the rectangles.
-    const bool cutouts = std::any_of(brief.rooms.begin(), brief.rooms.end(), [](const Room& r) { return r.cutout; });
-    const double tol = 1e-9 * std::max(fp.width, fp.depth);
-    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
-        const FacadeWish& wish = brief.rooms[i].facade;
-        bool met = true, any = false;
-        for (Side s : allSides) {
-            const bool touches = cutouts ? facesOutside(brief, fp, out.rooms, static_cast<int>(i), s, tol)
-                                         : x.graph.hasEdge(static_cast<int>(i), x.pole(s));
-            any = any || touches;
-            if (wish.has(s)) met = met && touches;
-        }
-        if (wish.anySide) met = met && any;
-        if (!met) out.unmetFacade.push_back(static_cast<int>(i));
-    }
     out.metrics = m;
-    out.misses = requirementMisses(brief, fp, out.rooms, PlanOptions{}.anyWall);
+    out.misses = report.counts;
     out.score = variantScore(brief, fp, out);
 }
 
@@ -109,7 +77,8 @@ std::vector<Rect> vertexRects(const PlanVariant& v) {
     return rects;
 }
 
-PlanVariant applySizing(const Brief& brief, const Footprint& fp, const PlanVariant& v, const SizingResult& sized) {
+PlanVariant applySizing(const Brief& brief, const Footprint& fp, const PlanVariant& v, const SizingResult& sized,
+                        const Thresholds& t) {
     PlanVariant out = v;
     out.rooms.clear();
     out.spaces.clear();
@@ -117,9 +86,8 @@ PlanVariant applySizing(const Brief& brief, const Footprint& fp, const PlanVaria
         if (v.extended.isRoom(u)) out.rooms.push_back(sized.rects[u]);
         else if (v.extended.isSpare(u)) out.spaces.push_back(sized.rects[u]);
     }
-    updateMetrics(brief, fp, v.extended, out);
+    updateMetrics(brief, fp, out, t);
     out.sized = true;
-    out.unmet = sized.unmet;
     return out;
 }
 
@@ -201,11 +169,11 @@ PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const Regu
     for (Rect& r : out.rooms) snap(r);
     for (Rect& r : out.spaces) snap(r);
 
-    updateMetrics(brief, fp, x, out);
+    updateMetrics(brief, fp, out, Thresholds{options.anyWall});
     return out;
 }
 
-StageCheck checkVariant(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
+StageCheck checkVariant(const Brief& brief, const Footprint& fp, const PlanVariant& v, const Thresholds& t) {
     const double tol = 1e-6 * std::max(fp.width, fp.depth);
     std::vector<Rect> all = v.rooms;
     all.insert(all.end(), v.spaces.begin(), v.spaces.end());
@@ -216,20 +184,18 @@ StageCheck checkVariant(const Brief& brief, const Footprint& fp, const PlanVaria
         if (r.x0 < -tol || r.y0 < -tol || r.x1 > fp.width + tol || r.y1 > fp.depth + tol)
             return StageCheck::failed("a rectangle leaves the footprint");
         area += r.area();
-        for (std::size_t j = i + 1; j < all.size(); ++j) {
-            const Rect& s = all[j];
-            if (std::min(r.x1, s.x1) - std::max(r.x0, s.x0) > tol &&
-                std::min(r.y1, s.y1) - std::max(r.y0, s.y0) > tol)
-                return StageCheck::failed("two rectangles overlap");
-        }
+        for (std::size_t j = i + 1; j < all.size(); ++j)
+            if (interiorsOverlap(r, all[j], tol)) return StageCheck::failed("two rectangles overlap");
     }
     if (std::abs(area - fp.width * fp.depth) > 1e-6 * fp.width * fp.depth) return StageCheck::failed("the footprint is not filled");
+    // Every adjacency not listed as dropped has its wall, by the measure's own rule.
+    const double line = lineTolerance(fp, t);
     for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
         if (std::count(v.dropped.begin(), v.dropped.end(), static_cast<int>(a))) continue;
         const Adjacency& adj = brief.adjacencies[a];
-        const double wall = sharedWall(v.rooms[brief.roomIndex(adj.a)], v.rooms[brief.roomIndex(adj.b)], tol);
-        const double need = adj.kind == AdjacencyKind::Door ? brief.doorWidth - tol : tol;
-        if (wall < need) return StageCheck::failed("adjacency " + adj.a + "–" + adj.b + " is not realised");
+        const double wall = sharedWallLength(v.rooms[brief.roomIndex(adj.a)], v.rooms[brief.roomIndex(adj.b)], line);
+        if (!wallMeets(wall, wallNeeded(brief, adj, t), t))
+            return StageCheck::failed("adjacency " + adj.a + "–" + adj.b + " is not realised");
     }
     return {};
 }

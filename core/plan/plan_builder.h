@@ -65,7 +65,7 @@ PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const Regu
 // `v` with the rectangles of a sizing result of its layout, its metrics,
 // dropped adjacencies, unmet requirements and score recomputed.
 PlanVariant applySizing(const Brief& brief, const Footprint& footprint, const PlanVariant& v,
-                        const SizingResult& sized);
+                        const SizingResult& sized, const Thresholds& thresholds = {});
 
 // The rectangles of a variant per vertex of its extended graph (rooms and
 // spare spaces in vertex order; poles empty), as the sizer indexes them.
@@ -73,7 +73,8 @@ std::vector<Rect> vertexRects(const PlanVariant& v);
 
 // Independent-of-construction check of a variant against its brief: the
 // rectangles tile the footprint, every adjacency not listed as dropped is a
-// shared wall (doors at least doorWidth).
-StageCheck checkVariant(const Brief& brief, const Footprint& footprint, const PlanVariant& v);
+// shared wall by the measure's rule (doors at least doorWidth). O(V² + E).
+StageCheck checkVariant(const Brief& brief, const Footprint& footprint, const PlanVariant& v,
+                        const Thresholds& thresholds = {});
 
 } // namespace abut

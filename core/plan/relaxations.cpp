@@ -70,7 +70,7 @@ struct Verifier {
     Clock::time_point deadline;   // for re-plans
     bool haveDeadline = false;
 
-    static std::string key(const UnmetItem& u) { return u.field + "#" + u.requirement; }
+    static std::string key(const UnmetItem& u) { return u.key(); }
 
     double secondsLeft() const {
         return haveDeadline ? std::chrono::duration<double>(deadline - Clock::now()).count() : 1.0;
@@ -131,228 +131,285 @@ std::vector<int> neighboursOf(const PlanVariant& v, int i, double tol) {
 
 } // namespace
 
+namespace {
+
+// What every part of the search for relaxations shares.
+struct Context {
+    const Brief& given;     // as the planner wrote it
+    Brief brief;            // as planned (cut-outs added, targets spread)
+    const Footprint& fp;
+    const PlanVariant& v;
+    Verifier check;
+    Clock::time_point started;
+    double seconds = 0;
+    std::string unit, unit2;
+    double tol = 0;
+
+    bool inTime() const {
+        return seconds <= 0 || std::chrono::duration<double>(Clock::now() - started).count() < seconds;
+    }
+    std::string roomField(int i, const char* name) const { return "/rooms/" + std::to_string(i) + "/" + name; }
+};
+
+Relaxation make(std::string field, std::string from, std::string to, std::string text, std::string holds,
+                double change, std::vector<int> rooms = {}, int adjacency = -1) {
+    Relaxation r;
+    r.field = std::move(field);
+    r.from = std::move(from);
+    r.to = std::move(to);
+    r.text = std::move(text);
+    r.holds = std::move(holds);
+    r.change = change;
+    r.rooms = std::move(rooms);
+    r.adjacency = adjacency;
+    return r;
+}
+
+Relaxation footprintRelaxation(const Context& c, bool wide, double now, const std::string& why) {
+    const double was = wide ? c.fp.width : c.fp.depth;
+    return make(wide ? "/footprint/width" : "/footprint/depth", num(was), num(now),
+                std::string("Footprint ") + (wide ? "width " : "depth ") + num(now) + " " + c.unit + " instead of " +
+                    num(was) + why,
+                std::string("the footprint's ") + (wide ? "width" : "depth") + " of " + num(was) + " " + c.unit,
+                now / was - 1);
+}
+
+Relaxation targetRelaxation(const Context& c, int i, double now, const std::string& why = {}) {
+    const std::string& name = c.brief.rooms[i].displayName();
+    const double was = c.given.rooms[i].area;
+    return make(c.roomField(i, "area"), num(was), num(now),
+                name + ": target " + num(now) + " " + c.unit2 + " instead of " + num(was) + why,
+                name + "'s target of " + num(was) + " " + c.unit2, std::abs(now - was) / was, {i});
+}
+
+Relaxation minWidthRelaxation(const Context& c, int i, double now) {
+    const Room& r = c.brief.rooms[i];
+    return make(c.roomField(i, "minWidth"), num(*r.minWidth), num(now),
+                r.displayName() + ": minimum width " + num(now) + " " + c.unit + " instead of " + num(*r.minWidth),
+                r.displayName() + "'s minimum width of " + num(*r.minWidth) + " " + c.unit, 1 - now / *r.minWidth, {i});
+}
+
+Relaxation aspectRelaxation(const Context& c, int i, double now) {
+    const Room& r = c.brief.rooms[i];
+    return make(c.roomField(i, "maxAspect"), num(*r.maxAspect), num(now),
+                r.displayName() + ": aspect limit 1:" + num(now) + " instead of 1:" + num(*r.maxAspect),
+                r.displayName() + "'s aspect limit of 1:" + num(*r.maxAspect), now / *r.maxAspect - 1, {i});
+}
+
+Relaxation facadeRelaxation(const Context& c, int i) {
+    const Room& r = c.brief.rooms[i];
+    return make(c.roomField(i, "facade"), facadeJson(r.facade), "[]",
+                r.displayName() + ": give up the wish for " + facadeWords(r.facade),
+                r.displayName() + "'s wish for " + facadeWords(r.facade), 1, {i});
+}
+
+// Relaxations found for one requirement, each with how many missed
+// requirements it meets.
+struct Offers {
+    std::vector<Relaxation> found;
+    std::vector<int> fixes;
+    void offer(int n, Relaxation r) {
+        if (n <= 0) return;
+        fixes.push_back(n);
+        found.push_back(std::move(r));
+    }
+    // The change that meets the most first (a footprint that is too small:
+    // the footprint, not one room), then the smallest change.
+    std::vector<std::size_t> order() const {
+        std::vector<std::size_t> o(found.size());
+        for (std::size_t k = 0; k < o.size(); ++k) o[k] = k;
+        std::stable_sort(o.begin(), o.end(), [&](std::size_t a, std::size_t b) {
+            return fixes[a] != fixes[b] ? fixes[a] > fixes[b] : found[a].change < found[b].change;
+        });
+        return o;
+    }
+};
+
+// Targets over the footprint: the footprint just large enough, either way,
+// or one room's target lowered by the excess; verified by a short re-plan
+// when re-sizing this arrangement cannot take it. Those that leave nothing
+// missed first, then the smallest change.
+std::vector<Relaxation> overFull(const Context& c, const std::vector<UnmetItem>& items) {
+    std::vector<std::pair<int, Relaxation>> global;
+    const double total = c.given.totalTargetArea(), area = c.fp.width * c.fp.depth;
+    for (const bool wide : {true, false}) {
+        if (!c.inTime()) break;
+        Footprint f = c.fp;
+        (wide ? f.width : f.depth) = std::ceil(total / (wide ? c.fp.depth : c.fp.width) * 100 - 1e-6) / 100;
+        Brief b = c.given;
+        b.footprint = f;
+        b = plannedBrief(b);
+        if (const int n = c.check.meets(b, f, items.front(), /*strict=*/false, /*replan=*/true); n > 0)
+            global.push_back({n, footprintRelaxation(c, wide, wide ? f.width : f.depth, ", so that the targets fit")});
+    }
+    // The rooms furthest under their targets, each lowered by the excess.
+    std::vector<std::pair<double, int>> under;
+    for (const UnmetItem& u : items)
+        if (u.kind == RequirementKind::Area && u.achieved < u.target && c.given.surplus != Surplus::Spread)
+            under.push_back({u.achieved - u.target, u.rooms.front()});
+    std::sort(under.begin(), under.end());
+    for (std::size_t k = 0; k < under.size() && k < 2 && c.inTime(); ++k) {
+        const int i = under[k].second;
+        const double now = std::floor((c.given.rooms[i].area - (total - area)) * 10) / 10;
+        if (now < 0.5 * c.given.rooms[i].area) continue; // not a relaxation a planner would take
+        Brief b = c.brief;
+        b.rooms[i].area = now;
+        if (const int n = c.check.meets(b, c.fp, items.front(), false, true); n > 0)
+            global.push_back({n, targetRelaxation(c, i, now, ", so that the targets fit")});
+    }
+    const int all = static_cast<int>(c.check.before.size());
+    std::stable_sort(global.begin(), global.end(), [all](const auto& a, const auto& b) {
+        return (a.first == all) != (b.first == all) ? a.first == all : a.second.change < b.second.change;
+    });
+    std::vector<Relaxation> out;
+    for (auto& [n, r] : global) out.push_back(std::move(r));
+    return out;
+}
+
+// The room's own numbers: its target set to what it gets, its minimum width
+// or aspect limit eased to what it is. (With `surplus: spread` a target is
+// not what the room gets: no such suggestion.)
+void ownNumbers(const Context& c, const UnmetItem& item, int i, Offers& o) {
+    if (item.kind == RequirementKind::Area && c.given.surplus != Surplus::Spread) {
+        Brief b = c.brief;
+        b.rooms[i].area = std::round(item.achieved * 10) / 10;
+        o.offer(c.check.meets(b, c.fp, item), targetRelaxation(c, i, b.rooms[i].area));
+    }
+    if (item.kind == RequirementKind::MinWidth) {
+        Brief b = c.brief;
+        b.rooms[i].minWidth = std::floor(item.achieved * 20) / 20;
+        if (*b.rooms[i].minWidth > 0) o.offer(c.check.meets(b, c.fp, item), minWidthRelaxation(c, i, *b.rooms[i].minWidth));
+    }
+    if (item.kind == RequirementKind::MaxAspect) {
+        Brief b = c.brief;
+        b.rooms[i].maxAspect = std::ceil(item.achieved * 10) / 10;
+        o.offer(c.check.meets(b, c.fp, item), aspectRelaxation(c, i, *b.rooms[i].maxAspect));
+    }
+}
+
+// The footprint, when the brief gives one: the smallest of a few steps.
+void footprintSteps(const Context& c, const UnmetItem& item, Offers& o) {
+    for (const bool wide : {true, false}) {
+        for (double step : {0.02, 0.05, 0.1, 0.2}) {
+            Footprint f = c.fp;
+            (wide ? f.width : f.depth) = std::round((wide ? c.fp.width : c.fp.depth) * (1 + step) * 100) / 100;
+            Brief b = c.given;
+            b.footprint = f;
+            b = plannedBrief(b); // with `surplus: spread` the targets follow the footprint
+            const int n = c.check.meets(b, f, item);
+            if (n == 0) continue;
+            o.offer(n, footprintRelaxation(c, wide, wide ? f.width : f.depth, ""));
+            break;
+        }
+    }
+}
+
+// What holds a room's numbers there: the requirements of the rooms beside
+// it, each eased in turn (their target by this room's excess or shortfall, a
+// minimum width by 15 %, an aspect limit by 25 %, a facade wish given up).
+// Those that free it are what hold it.
+void neighbours(const Context& c, const UnmetItem& item, int i, Offers& o) {
+    const std::vector<int> next = neighboursOf(c.v, i, c.tol);
+    for (std::size_t k = 0; k < next.size() && k < 6 && c.inTime(); ++k) {
+        const int j = next[k];
+        const Room& rj = c.brief.rooms[j];
+        if (item.kind == RequirementKind::Area && c.given.surplus != Surplus::Spread) {
+            const double now = std::round((c.given.rooms[j].area + (item.achieved - item.target)) * 10) / 10;
+            if (now > 0 && std::abs(now - c.given.rooms[j].area) > 0.05) {
+                Brief b = c.brief;
+                b.rooms[j].area = now;
+                o.offer(c.check.meets(b, c.fp, item), targetRelaxation(c, j, now));
+            }
+        }
+        if (rj.minWidth) {
+            Brief b = c.brief;
+            b.rooms[j].minWidth = std::floor(*rj.minWidth * 0.85 * 20) / 20;
+            o.offer(c.check.meets(b, c.fp, item), minWidthRelaxation(c, j, *b.rooms[j].minWidth));
+        }
+        if (rj.maxAspect) {
+            Brief b = c.brief;
+            b.rooms[j].maxAspect = std::ceil(*rj.maxAspect * 1.25 * 10) / 10;
+            o.offer(c.check.meets(b, c.fp, item), aspectRelaxation(c, j, *b.rooms[j].maxAspect));
+        }
+        if (!rj.facade.empty()) {
+            Brief b = c.brief;
+            b.rooms[j].facade = {};
+            o.offer(c.check.meets(b, c.fp, item), facadeRelaxation(c, j));
+        }
+    }
+}
+
+// Giving the requirement up: a facade wish, or a 'must' made 'should'.
+void givingUp(const Context& c, const UnmetItem& item, int i, Offers& o) {
+    if (item.kind == RequirementKind::Facade && i >= 0) o.offer(1, facadeRelaxation(c, i));
+    if ((item.kind == RequirementKind::Adjacency || item.kind == RequirementKind::Door) && item.adjacency >= 0) {
+        const Adjacency& a = c.brief.adjacencies[item.adjacency];
+        const std::string names =
+            c.brief.rooms[item.rooms[0]].displayName() + " and " + c.brief.rooms[item.rooms[1]].displayName();
+        o.offer(1, make("/adjacencies/" + std::to_string(item.adjacency), adjacencyJson(a, Priority::Must),
+                        adjacencyJson(a, Priority::Should), names + ": make the " + toString(a.kind) + " 'should'",
+                        "the 'must' " + std::string(toString(a.kind)) + " between " + names, 1, item.rooms,
+                        item.adjacency));
+    }
+}
+
+} // namespace
+
 std::vector<Relaxation> relaxationsFor(const Brief& given, const Footprint& fp, const PlanVariant& v, int limit,
                                        double seconds) {
     std::vector<Relaxation> out;
     const auto started = Clock::now();
-    auto inTime = [&] {
-        return seconds <= 0 || std::chrono::duration<double>(Clock::now() - started).count() < seconds;
-    };
-    const Brief brief = plannedBrief(given);
     const std::vector<UnmetItem> items = unmetRequirements(given, fp, v);
-    if (items.empty() || v.rooms.size() != brief.rooms.size() || v.extended.graph.vertexCount() == 0) return out;
-    Verifier check{fp, v, {}, started + std::chrono::duration_cast<Clock::duration>(std::chrono::duration<double>(seconds)),
-                   seconds > 0};
-    for (const UnmetItem& u : items) check.before.insert(Verifier::key(u));
-    const std::string& unit = brief.units;
-    const std::string unit2 = unit + "\xC2\xB2";
-    const double tol = 1e-9 * std::max(fp.width, fp.depth);
+    Context c{given, plannedBrief(given), fp, v,
+              Verifier{fp, v, {}, started + std::chrono::duration_cast<Clock::duration>(std::chrono::duration<double>(seconds)),
+                       seconds > 0},
+              started, seconds, given.units, given.units + "\xC2\xB2", 1e-9 * std::max(fp.width, fp.depth)};
+    if (items.empty() || v.rooms.size() != c.brief.rooms.size() || v.extended.graph.vertexCount() == 0) return out;
+    for (const UnmetItem& u : items) c.check.before.insert(Verifier::key(u));
     // Found so far, keyed by the change: the same change meeting several
     // requirements is one relaxation that lists them all.
     std::map<std::string, std::size_t> byChange;
-    auto add = [&](Relaxation r, const std::string& meets) {
+    auto add = [&](Relaxation r, const UnmetItem& meets) {
         const std::string k = r.field + "=" + r.to;
         if (auto it = byChange.find(k); it != byChange.end()) {
-            std::vector<std::string>& m = out[it->second].meets;
-            if (std::find(m.begin(), m.end(), meets) == m.end()) m.push_back(meets);
-            return false;
+            Relaxation& known = out[it->second];
+            if (std::find(known.meetsKeys.begin(), known.meetsKeys.end(), meets.key()) == known.meetsKeys.end()) {
+                known.meets.push_back(meets.text);
+                known.meetsKeys.push_back(meets.key());
+            }
+            return;
         }
-        if (static_cast<int>(out.size()) >= limit) return false;
-        r.meets = {meets};
+        if (static_cast<int>(out.size()) >= limit) return;
+        r.meets = {meets.text};
+        r.meetsKeys = {meets.key()};
         byChange[k] = out.size();
         out.push_back(std::move(r));
-        return true;
     };
-    auto footprintRelaxation = [&](bool wide, double now, const std::string& why) {
-        const double was = wide ? fp.width : fp.depth;
-        return Relaxation{wide ? "/footprint/width" : "/footprint/depth", num(was), num(now),
-                          std::string("Footprint ") + (wide ? "width " : "depth ") + num(now) + " " + unit +
-                              " instead of " + num(was) + why,
-                          std::string("the footprint's ") + (wide ? "width" : "depth") + " of " + num(was) + " " + unit,
-                          {}, now / was - 1};
-    };
-    // Targets over the footprint: the footprint just large enough, either
-    // way, or one room's target lowered by the excess; verified by a short
-    // re-plan when re-sizing this arrangement cannot take it.
     const double total = given.totalTargetArea(), area = fp.width * fp.depth;
     if (given.footprint && total > area * (1 + 1e-9)) {
-        const std::string why = "the targets add up to " + num(total) + " " + unit2 + ", more than the footprint's " +
-                                num(area) + " " + unit2;
-        std::vector<std::pair<int, Relaxation>> global;
-        for (const bool wide : {true, false}) {
-            if (!inTime()) break;
-            Footprint f = fp;
-            (wide ? f.width : f.depth) = std::ceil(total / (wide ? fp.depth : fp.width) * 100 - 1e-6) / 100;
-            Brief b = given;
-            b.footprint = f;
-            b = plannedBrief(b);
-            if (const int n = check.meets(b, f, items.front(), /*strict=*/false, /*replan=*/true); n > 0)
-                global.push_back({n, footprintRelaxation(wide, wide ? f.width : f.depth, ", so that the targets fit")});
-        }
-        // The rooms furthest under their targets, each lowered by the excess.
-        std::vector<std::pair<double, int>> under;
-        for (const UnmetItem& u : items)
-            if (u.requirement == "area" && u.got < u.wanted && given.surplus != Surplus::Spread)
-                under.push_back({u.got - u.wanted, u.rooms.front()});
-        std::sort(under.begin(), under.end());
-        for (std::size_t k = 0; k < under.size() && k < 2 && inTime(); ++k) {
-            const int i = under[k].second;
-            const double now = std::floor((given.rooms[i].area - (total - area)) * 10) / 10;
-            if (now < 0.5 * given.rooms[i].area) continue; // not a relaxation a planner would take
-            Brief b = brief;
-            b.rooms[i].area = now;
-            if (const int n = check.meets(b, fp, items.front(), false, true); n > 0)
-                global.push_back({n, {"/rooms/" + std::to_string(i) + "/area", num(given.rooms[i].area), num(now),
-                                      brief.rooms[i].displayName() + ": target " + num(now) + " " + unit2 +
-                                          " instead of " + num(given.rooms[i].area) + ", so that the targets fit",
-                                      brief.rooms[i].displayName() + "'s target of " + num(given.rooms[i].area) + " " +
-                                          unit2,
-                                      {},
-                                      1 - now / given.rooms[i].area}});
-        }
-        // Those that leave nothing missed first, then the smallest change.
-        const int all = static_cast<int>(check.before.size());
-        std::stable_sort(global.begin(), global.end(), [all](const auto& a, const auto& b) {
-            return (a.first == all) != (b.first == all) ? a.first == all : a.second.change < b.second.change;
-        });
-        for (auto& [n, r] : global) add(std::move(r), why);
+        UnmetItem why; // the targets over the footprint: not an item of the plan, a fact of the brief
+        why.text = "the targets add up to " + num(total) + " " + c.unit2 + ", more than the footprint's " + num(area) +
+                   " " + c.unit2;
+        why.field = "/footprint";
+        for (Relaxation& r : overFull(c, items)) add(std::move(r), why);
     }
     int tried = 0;
     bool footprintTried = false;
     for (const UnmetItem& item : items) {
-        if (static_cast<int>(out.size()) >= limit || ++tried > 8 || !inTime()) break;
-        std::vector<Relaxation> found;
-        std::vector<int> fixes; // per entry of `found`: missed requirements it meets
-        auto offer = [&](int n, Relaxation r) {
-            if (n <= 0) return;
-            fixes.push_back(n);
-            found.push_back(std::move(r));
-        };
+        if (static_cast<int>(out.size()) >= limit || ++tried > 8 || !c.inTime()) break;
+        Offers o;
+        const bool room = item.kind == RequirementKind::Area || item.kind == RequirementKind::MinWidth ||
+                          item.kind == RequirementKind::MaxAspect;
         const int i = item.rooms.empty() ? -1 : item.rooms.front();
-        const std::string name = i >= 0 ? brief.rooms[i].displayName() : std::string();
-        const std::string at = "/rooms/" + std::to_string(i);
-        // The room's own numbers.
-        // (With `surplus: spread` a target is not what the room gets: no such suggestion.)
-        if (item.requirement == "area" && i >= 0 && given.surplus != Surplus::Spread) {
-            Brief b = brief;
-            b.rooms[i].area = std::round(item.got * 10) / 10;
-            offer(check.meets(b, fp, item),
-                  {item.field, num(given.rooms[i].area), num(b.rooms[i].area),
-                   name + ": target " + num(b.rooms[i].area) + " " + unit2 + " instead of " + num(given.rooms[i].area),
-                   name + "'s target of " + num(given.rooms[i].area) + " " + unit2, {},
-                   std::abs(b.rooms[i].area - brief.rooms[i].area) / brief.rooms[i].area});
-        }
-        if (item.requirement == "minWidth" && i >= 0) {
-            Brief b = brief;
-            b.rooms[i].minWidth = std::floor(item.got * 20) / 20;
-            if (*b.rooms[i].minWidth > 0)
-                offer(check.meets(b, fp, item),
-                      {item.field, num(*brief.rooms[i].minWidth), num(*b.rooms[i].minWidth),
-                       name + ": minimum width " + num(*b.rooms[i].minWidth) + " " + unit + " instead of " +
-                           num(*brief.rooms[i].minWidth),
-                       name + "'s minimum width of " + num(*brief.rooms[i].minWidth) + " " + unit, {},
-                       1 - *b.rooms[i].minWidth / *brief.rooms[i].minWidth});
-        }
-        if (item.requirement == "maxAspect" && i >= 0) {
-            Brief b = brief;
-            b.rooms[i].maxAspect = std::ceil(item.got * 10) / 10;
-            offer(check.meets(b, fp, item),
-                  {item.field, num(*brief.rooms[i].maxAspect), num(*b.rooms[i].maxAspect),
-                   name + ": aspect limit 1:" + num(*b.rooms[i].maxAspect) + " instead of 1:" +
-                       num(*brief.rooms[i].maxAspect),
-                   name + "'s aspect limit of 1:" + num(*brief.rooms[i].maxAspect), {},
-                   *b.rooms[i].maxAspect / *brief.rooms[i].maxAspect - 1});
-        }
-        // The footprint, when the brief gives one: the smallest of a few steps
-        // (tried for the first requirement it could meet only: eight sizings).
-        if (given.footprint && !footprintTried && item.requirement != "facade" && item.requirement != "adjacency" &&
-            item.requirement != "door") {
+        if (room && i >= 0) ownNumbers(c, item, i, o);
+        // (tried for the first requirement it could meet only: eight sizings)
+        if (given.footprint && !footprintTried && (room || item.kind == RequirementKind::Fixed)) {
             footprintTried = true;
-            for (const bool wide : {true, false}) {
-                for (double step : {0.02, 0.05, 0.1, 0.2}) {
-                    Footprint f = fp;
-                    (wide ? f.width : f.depth) = std::round((wide ? fp.width : fp.depth) * (1 + step) * 100) / 100;
-                    Brief b = given;
-                    b.footprint = f;
-                    b = plannedBrief(b); // with `surplus: spread` the targets follow the footprint
-                    const int n = check.meets(b, f, item);
-                    if (n == 0) continue;
-                    offer(n, footprintRelaxation(wide, wide ? f.width : f.depth, ""));
-                    break;
-                }
-            }
+            footprintSteps(c, item, o);
         }
-        // What holds a room's numbers there: the requirements of the rooms
-        // beside it, each eased in turn (their target by this room's excess
-        // or shortfall, a minimum width by 15 %, an aspect limit by 25 %, a
-        // facade wish given up). Those that free it are what hold it.
-        if (i >= 0 && (item.requirement == "area" || item.requirement == "minWidth" || item.requirement == "maxAspect")) {
-            const std::vector<int> next = neighboursOf(v, i, tol);
-            for (std::size_t k = 0; k < next.size() && k < 6 && inTime(); ++k) {
-                const int j = next[k];
-                const Room& rj = brief.rooms[j];
-                const std::string nj = rj.displayName(), aj = "/rooms/" + std::to_string(j);
-                if (item.requirement == "area" && given.surplus != Surplus::Spread) {
-                    const double now = std::round((given.rooms[j].area + (item.got - item.wanted)) * 10) / 10;
-                    if (now > 0 && std::abs(now - given.rooms[j].area) > 0.05) {
-                        Brief b = brief;
-                        b.rooms[j].area = now;
-                        offer(check.meets(b, fp, item),
-                              {aj + "/area", num(given.rooms[j].area), num(now),
-                               nj + ": target " + num(now) + " " + unit2 + " instead of " + num(given.rooms[j].area),
-                               nj + "'s target of " + num(given.rooms[j].area) + " " + unit2, {},
-                               std::abs(now - given.rooms[j].area) / given.rooms[j].area});
-                    }
-                }
-                if (rj.minWidth) {
-                    Brief b = brief;
-                    b.rooms[j].minWidth = std::floor(*rj.minWidth * 0.85 * 20) / 20;
-                    offer(check.meets(b, fp, item),
-                          {aj + "/minWidth", num(*rj.minWidth), num(*b.rooms[j].minWidth),
-                           nj + ": minimum width " + num(*b.rooms[j].minWidth) + " " + unit + " instead of " +
-                               num(*rj.minWidth),
-                           nj + "'s minimum width of " + num(*rj.minWidth) + " " + unit, {},
-                           1 - *b.rooms[j].minWidth / *rj.minWidth});
-                }
-                if (rj.maxAspect) {
-                    Brief b = brief;
-                    b.rooms[j].maxAspect = std::ceil(*rj.maxAspect * 1.25 * 10) / 10;
-                    offer(check.meets(b, fp, item),
-                          {aj + "/maxAspect", num(*rj.maxAspect), num(*b.rooms[j].maxAspect),
-                           nj + ": aspect limit 1:" + num(*b.rooms[j].maxAspect) + " instead of 1:" + num(*rj.maxAspect),
-                           nj + "'s aspect limit of 1:" + num(*rj.maxAspect), {},
-                           *b.rooms[j].maxAspect / *rj.maxAspect - 1});
-                }
-                if (!rj.facade.empty()) {
-                    Brief b = brief;
-                    b.rooms[j].facade = {};
-                    offer(check.meets(b, fp, item), {aj + "/facade", facadeJson(rj.facade), "[]",
-                                                     nj + ": give up the wish for " + facadeWords(rj.facade),
-                                                     nj + "'s wish for " + facadeWords(rj.facade), {}, 1});
-                }
-            }
-        }
-        // Giving something up.
-        if (item.requirement == "facade" && i >= 0)
-            offer(1, {item.field, facadeJson(brief.rooms[i].facade), "[]",
-                      name + ": give up the wish for " + facadeWords(brief.rooms[i].facade),
-                      name + "'s wish for " + facadeWords(brief.rooms[i].facade), {}, 1});
-        if ((item.requirement == "adjacency" || item.requirement == "door") && item.adjacency >= 0) {
-            const Adjacency& a = brief.adjacencies[item.adjacency];
-            offer(1, {item.field, adjacencyJson(a, Priority::Must), adjacencyJson(a, Priority::Should),
-                      item.text.substr(0, item.text.find(':')) + ": make the " + toString(a.kind) + " 'should'",
-                      "the 'must' " + std::string(toString(a.kind)) + " between " +
-                          item.text.substr(0, item.text.find(':')),
-                      {}, 1});
-        }
-        // The change that meets the most first (a footprint that is too
-        // small: the footprint, not one room), then the smallest change.
-        std::vector<std::size_t> order(found.size());
-        for (std::size_t k = 0; k < order.size(); ++k) order[k] = k;
-        std::stable_sort(order.begin(), order.end(), [&](std::size_t a, std::size_t b) {
-            return fixes[a] != fixes[b] ? fixes[a] > fixes[b] : found[a].change < found[b].change;
-        });
-        for (std::size_t k : order) add(found[k], item.text);
+        if (room && i >= 0) neighbours(c, item, i, o);
+        givingUp(c, item, i, o);
+        for (std::size_t k : o.order()) add(o.found[k], item);
     }
     return out;
 }
@@ -361,7 +418,7 @@ std::vector<std::string> heldBy(const UnmetItem& item, const std::vector<Relaxat
     std::vector<std::string> out = item.heldBy;
     for (const Relaxation& r : relaxations) {
         if (r.field == item.field || r.holds.empty()) continue;
-        if (std::find(r.meets.begin(), r.meets.end(), item.text) == r.meets.end()) continue;
+        if (std::find(r.meetsKeys.begin(), r.meetsKeys.end(), item.key()) == r.meetsKeys.end()) continue;
         if (std::find(out.begin(), out.end(), r.holds) == out.end()) out.push_back(r.holds);
     }
     return out;

@@ -1011,7 +1011,7 @@ std::vector<SearchPlan> sizeArrangement(const Brief& brief, const Footprint& fp,
         problem.setOptions(so);
     }
     bool shortfall = false;
-    for (const UnmetRequirement& u : start.unmet) shortfall = shortfall || u.kind == "minWidth" || u.kind == "doorWall";
+    for (const UnmetRequirement& u : start.unmet) shortfall = shortfall || u.kind == RequirementKind::MinWidth || u.kind == RequirementKind::Door;
     if (shortfall) {
         problem.holdMinimumsAt(start);
         add(problem.solve(&start));
@@ -1025,7 +1025,7 @@ void judge(const Brief& brief, const Problem& p, const SearchOptions& o, SearchP
     for (int v = 0; v < plan.extended.graph.vertexCount(); ++v)
         if (!plan.extended.isPole(v)) blocks.push_back(plan.sized.rects[v]);
     std::vector<Rect> rooms(blocks.begin(), blocks.begin() + p.rooms);
-    plan.misses = requirementMisses(brief, p.fp, rooms, o.anyWall);
+    plan.misses = requirementMisses(brief, p.fp, rooms, Thresholds{o.anyWall});
     if (static_cast<int>(blocks.size()) == static_cast<int>(p.blocks.size())) {
         plan.cost = evaluate(p, blocks, nullptr).cost;
     } else { // more spare spaces than the search made (a plan from elsewhere): rooms only

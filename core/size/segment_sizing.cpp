@@ -464,10 +464,10 @@ SizingResult SizingProblem::solve(const SizingResult* start) const {
         };
         for (int k = 0; k < s.verticalCount; ++k)
             if (varX[k] >= 0 && !snap(true, k))
-                result.unmet.push_back({"grid", -1, -1, options_.grid, c.x[k], "a wall could not be put on the planning grid"});
+                result.unmet.push_back({RequirementKind::Grid, -1, -1, options_.grid, c.x[k], "a wall could not be put on the planning grid"});
         for (int k = 0; k < s.horizontalCount; ++k)
             if (varY[k] >= 0 && !snap(false, k))
-                result.unmet.push_back({"grid", -1, -1, options_.grid, c.y[k], "a wall could not be put on the planning grid"});
+                result.unmet.push_back({RequirementKind::Grid, -1, -1, options_.grid, c.y[k], "a wall could not be put on the planning grid"});
     }
 
     result.x = c.x;
@@ -503,14 +503,14 @@ void SizingProblem::describe(SizingResult& result) const {
         rs.aspect = std::max(q.width(), q.depth()) / std::min(q.width(), q.depth());
         const Room& room = brief_.rooms[i];
         if (std::abs(rs.deviation) > 0.01)
-            result.unmet.push_back({"area", static_cast<int>(i), -1, target_[i], rs.area,
+            result.unmet.push_back({RequirementKind::Area, static_cast<int>(i), -1, target_[i], rs.area,
                                     room.displayName() + " gets " + shortNumber(rs.area) + " instead of " +
                                         shortNumber(target_[i])});
         if (room.minWidth && std::min(q.width(), q.depth()) < *room.minWidth - 1e-9)
-            result.unmet.push_back({"minWidth", static_cast<int>(i), -1, *room.minWidth,
+            result.unmet.push_back({RequirementKind::MinWidth, static_cast<int>(i), -1, *room.minWidth,
                                     std::min(q.width(), q.depth()), room.displayName() + " is narrower than its minimum width"});
         if (room.maxAspect && rs.aspect > *room.maxAspect + 1e-6)
-            result.unmet.push_back({"maxAspect", static_cast<int>(i), -1, *room.maxAspect, rs.aspect,
+            result.unmet.push_back({RequirementKind::MaxAspect, static_cast<int>(i), -1, *room.maxAspect, rs.aspect,
                                     room.displayName() + " is more elongated than its maximum aspect"});
     }
     for (std::size_t i = 0; i < segs_.walls.size(); ++i) {
@@ -518,7 +518,7 @@ void SizingProblem::describe(SizingResult& result) const {
         if (wallMin_[i] <= options_.anyWall) continue;
         const double len = wall.vertical ? cy[wall.to] - cy[wall.from] : cx[wall.to] - cx[wall.from];
         if (len < wallMin_[i] - 1e-9)
-            result.unmet.push_back({"doorWall", wall.u, wall.v, wallMin_[i], len, "a door wall is shorter than a door"});
+            result.unmet.push_back({RequirementKind::Door, wall.u, wall.v, wallMin_[i], len, "a door wall is shorter than a door"});
     }
 }
 

@@ -26,6 +26,7 @@
 #pragma once
 
 #include "brief/brief.h"
+#include "brief/requirement_kind.h"
 #include "dual/rectangular_dual.h"
 
 #include <optional>
@@ -55,8 +56,12 @@ enum class SizingStatus {
     Relaxed,      // the hard requirements could not all fit; they were scaled down (see unmet)
 };
 
+// What the sizer could not meet of its own aims: a room more than 1 % off
+// the area it was sized towards, under its minimum width, over its aspect
+// limit, a door wall shorter than a door, a wall off the planning grid. (What
+// a plan misses of the brief is measured by search/requirements.h.)
 struct UnmetRequirement {
-    std::string kind;    // "minWidth", "doorWall", "area", "maxAspect", "grid"
+    RequirementKind kind = RequirementKind::Area; // Area, MinWidth, MaxAspect, Door, Grid
     int room = -1;       // vertex id (rooms: brief index)
     int other = -1;      // second room for walls
     double wanted = 0, got = 0;

@@ -113,8 +113,8 @@ private slots:
                 x[k] = to;
                 const SizingResult r = problem.evaluate(x, state.y);
                 for (const UnmetRequirement& u : r.unmet)
-                    QVERIFY2(u.kind == "area" || u.kind == "maxAspect",
-                             qPrintable(QString::fromStdString(u.kind + ": " + u.message)));
+                    QVERIFY2(u.kind == RequirementKind::Area || u.kind == RequirementKind::MaxAspect,
+                             qPrintable(QString::fromStdString(std::string(toString(u.kind)) + ": " + u.message)));
                 for (std::size_t i = 0; i < b.rooms.size(); ++i) {
                     const bool beside = s.west[i] == k || s.east[i] == k;
                     if (!beside) QCOMPARE(r.rooms[i].area, state.rooms[i].area);

@@ -50,9 +50,12 @@ def cutout_rects(brief):
             for c in brief["footprint"].get("cutouts", [])]
 
 
-def misses(brief, rooms, spaces=(), band=AREA_BAND):
+def judged(brief, rooms, spaces=(), band=AREA_BAND):
     """What the plan given as {id: (x0, y0, x1, y1)} (plus spare rectangles)
-    does not meet, as short strings; empty when usable."""
+    does not meet, as (requirement, room ids, text) with the requirement
+    spelled as the plan file's `unmet` spells it (area, minWidth, maxAspect,
+    door, adjacency, facade, fixed; "tiling" for the footprint itself).
+    `band`: the area band, or None for each room's own (areaTolerance, 5 %)."""
     out = []
     w, d = brief["footprint"]["width"], brief["footprint"]["depth"]
     door = brief.get("doorWidth", 0.9)
@@ -64,41 +67,50 @@ def misses(brief, rooms, spaces=(), band=AREA_BAND):
     union = unary_union(rects)
     total = sum(p.area for p in rects)
     if abs(union.area - net.area) > 1e-4 * w * d or abs(total - net.area) > 1e-4 * w * d:
-        out.append("the rooms do not tile the footprint")
+        out.append(("tiling", [], "the rooms do not tile the footprint"))
     if not net.buffer(1e-6, join_style=2).contains(union):
-        out.append("a room leaves the footprint or stands on a cut-out")
+        out.append(("tiling", [], "a room leaves the footprint or stands on a cut-out"))
     for r in brief["rooms"]:
-        x0, y0, x1, y1 = rooms[r["id"]]
+        rid = r["id"]
+        x0, y0, x1, y1 = rooms[rid]
         a = (x1 - x0) * (y1 - y0)
         dev = (a - r["area"]) / r["area"]
-        if abs(dev) > band + 1e-9:
-            out.append(f"{r['id']}: area {a:.2f} for {r['area']:.2f} ({dev:+.1%})")
+        own = r.get("areaTolerance", 0.05) if band is None else band
+        if abs(dev) > own + 1e-9:
+            out.append(("area", [rid], f"{rid}: area {a:.2f} for {r['area']:.2f} ({dev:+.1%})"))
         short, long_ = min(x1 - x0, y1 - y0), max(x1 - x0, y1 - y0)
         if r.get("minWidth") and short < r["minWidth"] - EPS:
-            out.append(f"{r['id']}: {short:.2f} wide, minimum {r['minWidth']:.2f}")
+            out.append(("minWidth", [rid], f"{rid}: {short:.2f} wide, minimum {r['minWidth']:.2f}"))
         if r.get("maxAspect") and short > 0 and long_ / short > r["maxAspect"] + EPS:
-            out.append(f"{r['id']}: aspect {long_ / short:.2f}, limit {r['maxAspect']}")
+            out.append(("maxAspect", [rid], f"{rid}: aspect {long_ / short:.2f}, limit {r['maxAspect']}"))
         wish = r.get("facade") or []
-        sides = {s: facade_length(rooms[r["id"]], s, w, d, cuts) for s in "NESW"}
+        sides = {s: facade_length(rooms[rid], s, w, d, cuts) for s in "NESW"}
         if r.get("fixed"):
             f = r["fixed"]
             want = (f["x"], f["y"], f["x"] + f["width"], f["y"] + f["depth"])
-            if max(abs(a - b) for a, b in zip(want, rooms[r["id"]])) > 1e-5:
-                out.append(f"{r['id']}: not where it is fixed")
+            if max(abs(a - b) for a, b in zip(want, rooms[rid])) > 1e-5:
+                out.append(("fixed", [rid], f"{rid}: not where it is fixed"))
         if "any" in wish and max(sides.values()) <= EPS:
-            out.append(f"{r['id']}: no exterior wall")
+            out.append(("facade", [rid], f"{rid}: no exterior wall"))
         for s in wish:
             if s != "any" and sides[s] <= EPS:
-                out.append(f"{r['id']}: misses the {s} facade")
+                out.append(("facade", [rid], f"{rid}: misses the {s} facade"))
     for a in brief["adjacencies"]:
         if a.get("priority", "must") != "must":
             continue
         u, v = a["rooms"]
         length = shared(rooms[u], rooms[v])
-        need = door - EPS if a.get("kind", "door") == "door" else EPS
+        kind = a.get("kind", "door")
+        need = door - EPS if kind == "door" else EPS
         if length < need:
-            out.append(f"must {a.get('kind', 'door')} {u}-{v}: shared wall {length:.2f}")
+            out.append(("door" if kind == "door" else "adjacency", [u, v],
+                        f"must {kind} {u}-{v}: shared wall {length:.2f}"))
     return out
+
+
+def misses(brief, rooms, spaces=(), band=AREA_BAND):
+    """What the plan does not meet, as short strings; empty when usable."""
+    return [text for _, _, text in judged(brief, rooms, spaces, band)]
 
 
 def plan_rooms(variant):

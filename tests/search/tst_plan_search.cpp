@@ -219,7 +219,7 @@ private slots:
         b.adjacencies = {adjacency("west", "east")};
         const Footprint fp{10, 4};
         const RequirementMisses m =
-            abut::requirementMisses(b, fp, {Rect{0, 0, 10 - eastWidth, 4}, Rect{10 - eastWidth, 0, 10, 4}}, 0.05);
+            abut::requirementMisses(b, fp, {Rect{0, 0, 10 - eastWidth, 4}, Rect{10 - eastWidth, 0, 10, 4}}, Thresholds{0.05});
         QCOMPARE(m.area, area);
         QCOMPARE(m.minWidth, minWidth);
         QCOMPARE(m.must, must);
@@ -346,7 +346,7 @@ private slots:
             const PlanVariant& v = plan.variants.front();
             std::vector<Rect> got;
             for (int i = 0; i < n; ++i) got.push_back(v.rooms[i]);
-            const RequirementMisses m = abut::requirementMisses(b, *b.footprint, got, PlanOptions{}.anyWall);
+            const RequirementMisses m = abut::requirementMisses(b, *b.footprint, got, Thresholds{PlanOptions{}.anyWall});
             QVERIFY2(m.must == 0, qPrintable(QString("trial %1: %2 'must' door(s) missed").arg(trial).arg(m.must)));
             QVERIFY2(m.worstAreaError <= 0.01,
                      qPrintable(QString("trial %1: worst area error %2").arg(trial).arg(m.worstAreaError)));

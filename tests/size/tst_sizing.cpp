@@ -157,7 +157,7 @@ void TestSizing::publishedMinimumsFitTheirDwelling() {
         QVERIFY(std::min(r.rects[i].width(), r.rects[i].depth()) >= widths[i] - 1e-9);
         QVERIFY(std::abs(r.rects[i].area() - rects[i].area()) < 0.01 * areas[i]);
     }
-    for (const UnmetRequirement& u : r.unmet) QVERIFY2(u.kind != "doorWall", u.message.c_str());
+    for (const UnmetRequirement& u : r.unmet) QVERIFY2(u.kind != RequirementKind::Door, u.message.c_str());
 }
 
 void TestSizing::impossibleMinimumsAreReported() {
@@ -168,7 +168,7 @@ void TestSizing::impossibleMinimumsAreReported() {
     for (Room& r : b.rooms) r.minWidth = 6.0; // eight rooms 6 m wide in 10 m: impossible
     const SizingResult r = SizingProblem(b, x, abut::testing::labelingOfTiling(x, rects), Footprint{10, 10}, looseWalls()).solve();
     QCOMPARE(r.status, SizingStatus::Relaxed);
-    QVERIFY(std::any_of(r.unmet.begin(), r.unmet.end(), [](const UnmetRequirement& u) { return u.kind == "minWidth"; }));
+    QVERIFY(std::any_of(r.unmet.begin(), r.unmet.end(), [](const UnmetRequirement& u) { return u.kind == RequirementKind::MinWidth; }));
     QVERIFY(checkRectangularDual(x, r.rects, 10, 10, 1e-6).ok); // still a valid plan
 }
 
@@ -180,7 +180,7 @@ void TestSizing::areasFarOverTheFootprintAreReported() {
     for (Room& r : b.rooms) r.area *= 3.0; // three times the footprint
     const SizingResult r = SizingProblem(b, x, abut::testing::labelingOfTiling(x, rects), Footprint{10, 10}, looseWalls()).solve();
     int areaMisses = 0;
-    for (const UnmetRequirement& u : r.unmet) areaMisses += u.kind == "area";
+    for (const UnmetRequirement& u : r.unmet) areaMisses += u.kind == RequirementKind::Area;
     QCOMPARE(areaMisses, 6);
 }
 
@@ -252,7 +252,7 @@ void TestSizing::gridSnapsWalls() {
     const SizingResult r = SizingProblem(b, x, abut::testing::labelingOfTiling(x, rects), Footprint{12, 9}, o).solve();
     for (double v : r.x) {
         const bool onGrid = std::abs(v / 0.3 - std::round(v / 0.3)) < 1e-9;
-        const bool reported = std::any_of(r.unmet.begin(), r.unmet.end(), [](const UnmetRequirement& u) { return u.kind == "grid"; });
+        const bool reported = std::any_of(r.unmet.begin(), r.unmet.end(), [](const UnmetRequirement& u) { return u.kind == RequirementKind::Grid; });
         QVERIFY(onGrid || reported);
     }
     QVERIFY(checkRectangularDual(x, r.rects, 12, 9, 1e-6).ok);

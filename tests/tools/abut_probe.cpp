@@ -88,6 +88,11 @@ int fingerprint(int argc, char** argv) {
                 for (const abut::Rect& r : *list)
                     for (double c : {r.x0, r.y0, r.x1, r.y1}) mix(std::llround(c * 1e6));
             for (int d : v.dropped) mix(d);
+            if (std::getenv("ABUT_PROBE_VERBOSE")) {
+                std::cout << "  variant score " << v.score << " dropped";
+                for (int d : v.dropped) std::cout << " " << d;
+                std::cout << " sized " << v.sized << " worst " << v.metrics.worstAreaError << "\n";
+            }
         }
         std::cout << argv[k] << " " << std::hex << h << std::dec << " " << abut::toString(plan.status) << " "
                   << plan.variants.size();
