@@ -26,28 +26,18 @@ std::string formatValue(double v) {
     return buf;
 }
 
-// A number that must be > 0, or >= `atLeast` when given.
+// A typed number in the brief's rules (brief/brief_rules.h).
 EditResult readPositive(const std::string& text, const char* what, double& out, double atLeast, double atMost) {
     const auto v = parsePlannerNumber(text);
     if (!v) return EditResult::refused(std::string(what) + " must be a number, got \"" + trimmed(text) + "\".");
-    if (*v <= 0 && atLeast > 0 && atLeast < 1)
-        return EditResult::refused(std::string(what) + " must be greater than 0, got " + formatValue(*v) + ".");
-    if (*v < atLeast)
-        return EditResult::refused(std::string(what) + " must be at least " + formatValue(atLeast) + ", got " +
-                                   formatValue(*v) + ".");
-    if (*v > atMost)
-        return EditResult::refused(std::string(what) + " must be at most " + formatValue(atMost) + ", got " +
-                                   formatValue(*v) + ".");
+    if (const std::string problem = numberProblem(*v, what, atLeast, atMost); !problem.empty())
+        return EditResult::refused(asSentence(problem));
     out = *v;
     return {};
 }
 
 EditResult readText(const std::string& text, const char* what, std::string& out) {
-    const std::size_t at = controlCharacterAt(text);
-    if (at != std::string::npos)
-        return EditResult::refused(std::string(what) + " holds a control character (a tab, a line break or an "
-                                                       "invisible code) at character " +
-                                   std::to_string(at + 1) + "; use plain text on one line.");
+    if (const std::string problem = textProblem(text, what); !problem.empty()) return EditResult::refused(asSentence(problem));
     out = text;
     return {};
 }
@@ -253,9 +243,9 @@ EditResult setBriefFieldUnchecked(Brief& brief, BriefField field, const std::str
         double v = 0;
         const EditResult r = readPositive(t, "Door wall length", v, minLength, maxLength);
         if (!r.ok()) return r;
-        if (brief.footprint && v > std::min(brief.footprint->width, brief.footprint->depth))
-            return EditResult::refused("Door wall length " + formatValue(v) +
-                                       " is longer than the footprint's shorter side.");
+        if (brief.footprint)
+            if (const std::string problem = doorWidthProblem(v, *brief.footprint); !problem.empty())
+                return EditResult::refused(asSentence(problem));
         brief.doorWidth = v;
         break;
     }
@@ -294,44 +284,6 @@ EditResult setBriefFieldUnchecked(Brief& brief, BriefField field, const std::str
     return {};
 }
 } // namespace
-
-std::string placementProblem(const Brief& brief) {
-    const auto inside = [&](const Placement& p) {
-        const double tol = 1e-9 * std::max(brief.footprint->width, brief.footprint->depth);
-        return p.x >= -tol && p.y >= -tol && p.x + p.width <= brief.footprint->width + tol &&
-               p.y + p.depth <= brief.footprint->depth + tol;
-    };
-    if (!brief.footprint) {
-        for (const Room& r : brief.rooms)
-            if (r.fixed) return r.displayName() + " is fixed in place, which needs a footprint with a width and depth.";
-        return {};
-    }
-    const Footprint& fp = *brief.footprint;
-    const double tol = 1e-6 * std::max(fp.width, fp.depth);
-    for (std::size_t k = 0; k < fp.cutouts.size(); ++k) {
-        const std::string name = "Cut-out " + std::to_string(k + 1);
-        if (!inside(fp.cutouts[k])) return name + " reaches past the footprint.";
-        for (std::size_t i = 0; i < k; ++i)
-            if (overlaps(fp.cutouts[k], fp.cutouts[i], tol))
-                return name + " overlaps cut-out " + std::to_string(i + 1) + "; draw the part they share once.";
-    }
-    if (!fp.cutouts.empty() && fp.netArea() <= tol * tol) return "The cut-outs leave nothing of the footprint to build on.";
-    if (!fp.cutouts.empty() && !isConnected(fp))
-        return "The cut-outs split the footprint in two; a plan is one piece (make one smaller or move it to an edge).";
-    for (std::size_t i = 0; i < brief.rooms.size(); ++i) {
-        const Room& r = brief.rooms[i];
-        if (!r.fixed || r.cutout) continue;
-        if (!inside(*r.fixed)) return r.displayName() + " is fixed outside the footprint.";
-        for (std::size_t k = 0; k < fp.cutouts.size(); ++k)
-            if (overlaps(*r.fixed, fp.cutouts[k], tol))
-                return r.displayName() + " is fixed over cut-out " + std::to_string(k + 1) + ", which is not building.";
-        for (std::size_t j = 0; j < i; ++j)
-            if (brief.rooms[j].fixed && overlaps(*r.fixed, *brief.rooms[j].fixed, tol))
-                return r.displayName() + " is fixed where " + brief.rooms[j].displayName() +
-                       " is fixed; two rooms cannot share floor.";
-    }
-    return {};
-}
 
 EditResult setRoomFixed(Brief& brief, int room, std::optional<Placement> at) {
     if (room < 0 || room >= static_cast<int>(brief.rooms.size())) return EditResult::refused("No such room.");

@@ -5,11 +5,13 @@
 // message in the planner's words and leaves the brief untouched. The editor
 // wraps these in undoable commands; they hold no state of their own.
 //
-// Field rules are the project file's (formats contract): area > 0,
-// minWidth > 0, maxAspect >= 1, facade a subset of N, E, S, W or "any".
+// Field rules and their wording are the project file's (brief/brief_rules.h,
+// formats contract): area > 0, minWidth > 0, maxAspect >= 1, facade a subset
+// of N, E, S, W or "any".
 #pragma once
 
 #include "brief/brief.h"
+#include "brief/brief_rules.h"
 
 #include <optional>
 #include <string>
@@ -72,11 +74,6 @@ EditResult setBriefField(Brief& brief, BriefField field, const std::string& text
 // would stand outside the footprint, on a cut-out or on another fixed room.
 EditResult setRoomFixed(Brief& brief, int room, std::optional<Placement> at);
 
-// The first thing wrong with the footprint's cut-outs and the fixed rooms,
-// in the planner's words (empty: nothing): outside the footprint, cut-outs
-// that overlap or split the footprint, a fixed room on a cut-out or on
-// another fixed room, a fixed room without a footprint.
-std::string placementProblem(const Brief& brief);
 
 // "12 9 12 9; 0 0 3 2" for the cut-outs.
 std::string cutoutsText(const std::vector<Placement>& cutouts);

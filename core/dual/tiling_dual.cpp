@@ -63,27 +63,10 @@ bool nudgeUpperWall(std::vector<Rect>& r, double X, double Y, double depth, doub
     return true;
 }
 
-} // namespace
-
-TilingDual dualOfTiling(const std::vector<Rect>& tiles, int roomCount, double width, double depth,
-                        const std::vector<std::string>& roomIds, const TilingDualOptions& options) {
-    TilingDual out;
-    const int t = static_cast<int>(tiles.size());
-    if (roomCount < 1 || roomCount > t) {
-        out.problem = "no rooms";
-        return out;
-    }
-    std::vector<Rect> r = tiles;
-    const double tol = options.tolerance * std::max(width, depth);
-    snapAxis(r, true, width, tol);
-    snapAxis(r, false, depth, tol);
-    for (const Rect& q : r)
-        if (!(q.x1 > q.x0 && q.y1 > q.y0)) {
-            out.problem = "a tile has no area";
-            return out;
-        }
-
-    // Points where four tiles meet, nudged apart one at a time.
+// Points where four tiles meet, nudged apart one at a time (towards the
+// contact `preferContact` wants). Empty on success, else what failed.
+std::string resolveFourCorners(std::vector<Rect>& r, double depth, const TilingDualOptions& options) {
+    const int t = static_cast<int>(r.size());
     for (int round = 0; round <= t; ++round) {
         std::map<std::pair<double, double>, std::vector<int>> corners;
         for (int i = 0; i < t; ++i)
@@ -111,18 +94,17 @@ TilingDual dualOfTiling(const std::vector<Rect>& tiles, int roomCount, double wi
                 break;
             }
         }
-        if (!nudged) break;
-        if (round == t) {
-            out.problem = "four tiles meet at a point that could not be resolved";
-            return out;
-        }
+        if (!nudged) return {};
     }
+    return "four tiles meet at a point that could not be resolved";
+}
 
-    // Vertices: rooms, the poles, then spare spaces.
-    const int n = roomCount;
+// The plane graph of the tiling: tiles (rooms as vertices 0..n−1, the
+// others after the four poles N, E, S, W), rotations read off the sides.
+void tilingGraph(const std::vector<Rect>& r, int n, double width, double depth, ExtendedGraph& x) {
+    const int t = static_cast<int>(r.size());
     auto vertexOf = [&](int tile) { return tile < n ? tile : tile + 4; };
     const int V = t + 4;
-    ExtendedGraph& x = out.extended;
     x.roomCount = n;
     x.graph = PlaneGraph(V);
     const int N = n, E = n + 1, S = n + 2, W = n + 3;
@@ -188,13 +170,14 @@ TilingDual dualOfTiling(const std::vector<Rect>& tiles, int roomCount, double wi
     x.graph.setRotation(S, poleRotation(south, E, W));
     x.graph.setRotation(W, poleRotation(west, S, N));
     x.graph.rebuildEdgeSet();
-    nameVertices(x, roomIds);
 
-    out.rects.assign(V, Rect{});
-    for (int i = 0; i < t; ++i) out.rects[vertexOf(i)] = r[i];
+}
 
-    // The labeling read off the rectangles.
-    RegularEdgeLabeling& rel = out.labeling;
+// The regular edge labeling read off the rectangles (per vertex).
+RegularEdgeLabeling tilingLabeling(const ExtendedGraph& x, const std::vector<Rect>& rects) {
+    const int n = x.roomCount, V = x.graph.vertexCount();
+    const int N = n, E = n + 1, S = n + 2, W = n + 3;
+    RegularEdgeLabeling rel;
     const PlaneGraph& g = x.graph;
     rel.at.resize(V);
     for (int v = 0; v < V; ++v) {
@@ -209,19 +192,51 @@ TilingDual dualOfTiling(const std::vector<Rect>& tiles, int roomCount, double wi
             else if (u == S) l = EdgeLabel::InRed;
             else if (u == W) l = EdgeLabel::InBlue;
             else if (u == E) l = EdgeLabel::OutBlue;
-            else if (out.rects[v].x1 == out.rects[u].x0) l = EdgeLabel::OutBlue;
-            else if (out.rects[v].x0 == out.rects[u].x1) l = EdgeLabel::InBlue;
-            else if (out.rects[v].y1 == out.rects[u].y0) l = EdgeLabel::OutRed;
+            else if (rects[v].x1 == rects[u].x0) l = EdgeLabel::OutBlue;
+            else if (rects[v].x0 == rects[u].x1) l = EdgeLabel::InBlue;
+            else if (rects[v].y1 == rects[u].y0) l = EdgeLabel::OutRed;
             else l = EdgeLabel::InRed;
             rel.at[v].push_back(l);
         }
     }
+    return rel;
+}
+
+} // namespace
+
+TilingDual dualOfTiling(const std::vector<Rect>& tiles, int roomCount, double width, double depth,
+                        const std::vector<std::string>& roomIds, const TilingDualOptions& options) {
+    TilingDual out;
+    const int t = static_cast<int>(tiles.size());
+    if (roomCount < 1 || roomCount > t) {
+        out.problem = "no rooms";
+        return out;
+    }
+    std::vector<Rect> r = tiles;
+    const double tol = options.tolerance * std::max(width, depth);
+    snapAxis(r, true, width, tol);
+    snapAxis(r, false, depth, tol);
+    for (const Rect& q : r)
+        if (!(q.x1 > q.x0 && q.y1 > q.y0)) {
+            out.problem = "a tile has no area";
+            return out;
+        }
+    if (std::string problem = resolveFourCorners(r, depth, options); !problem.empty()) {
+        out.problem = std::move(problem);
+        return out;
+    }
+    ExtendedGraph& x = out.extended;
+    tilingGraph(r, roomCount, width, depth, x);
+    nameVertices(x, roomIds);
+    out.rects.assign(t + 4, Rect{});
+    for (int i = 0; i < t; ++i) out.rects[i < roomCount ? i : i + 4] = r[i];
+    out.labeling = tilingLabeling(x, out.rects);
     const StageCheck gc = checkExtendedGraph(x);
     if (!gc.ok) {
         out.problem = "the tiling's graph is not an extended graph: " + gc.problem;
         return out;
     }
-    const StageCheck lc = checkRegularEdgeLabeling(x, rel);
+    const StageCheck lc = checkRegularEdgeLabeling(x, out.labeling);
     if (!lc.ok) {
         out.problem = "the tiling's labeling is not regular: " + lc.problem;
         return out;

@@ -65,23 +65,23 @@ std::string dxfText(const std::string& utf8) {
     return out;
 }
 
-} // namespace
+// Handles are fixed where tables point at each other.
+namespace handle {
+const std::string hBlockRecordTable = "1", hModel = "2", hPaper = "3", hLayerTable = "4", hLtypeTable = "5",
+    hStyleTable = "6", hAppidTable = "7", hVportTable = "8", hViewTable = "9", hUcsTable = "A",
+    hDimstyleTable = "B", hRootDict = "C", hGroupDict = "D", hByBlock = "E", hByLayer = "F",
+    hContinuous = "10", hStandardStyle = "11", hAcadAppid = "12", hActiveVport = "13",
+    hStandardDimstyle = "14", hModelBlock = "15", hModelEnd = "16", hPaperBlock = "17",
+    hPaperEnd = "18";
+} // namespace handle
 
-std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& v, const DxfOptions& options) {
-    Dxf d;
-    // Handles are fixed where tables point at each other.
-    const std::string hBlockRecordTable = "1", hModel = "2", hPaper = "3", hLayerTable = "4", hLtypeTable = "5",
-                      hStyleTable = "6", hAppidTable = "7", hVportTable = "8", hViewTable = "9", hUcsTable = "A",
-                      hDimstyleTable = "B", hRootDict = "C", hGroupDict = "D", hByBlock = "E", hByLayer = "F",
-                      hContinuous = "10", hStandardStyle = "11", hAcadAppid = "12", hActiveVport = "13",
-                      hStandardDimstyle = "14", hModelBlock = "15", hModelEnd = "16", hPaperBlock = "17",
-                      hPaperEnd = "18";
-    std::set<std::string> layers{"0", "OUTLINE", "SPARE", "LABELS"};
-    for (const Room& r : brief.rooms) layers.insert(dxfLayerOf(r.category));
-    if (options.wallThickness > 0) layers.insert("WALLS");
+using namespace handle;
 
-    // Entities first (into their own buffer) so the handle seed is known.
-    Dxf e;
+// The entities (into their own buffer, `e`, so that `d`'s handle seed is
+// known afterwards): the outline, each room's rectangle (and its inner wall
+// line), its name and area, the spare spaces.
+void writeEntities(Dxf& d, Dxf& e, const Brief& brief, const Footprint& fp, const PlanVariant& v,
+                   const DxfOptions& options) {
     const double textHeight = options.textHeight > 0 ? options.textHeight
                                                       : std::max(0.12, std::min(fp.width, fp.depth) / 60.0);
     auto loop = [&](const OutlineLoop& corners, const std::string& layer) {
@@ -141,7 +141,9 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     }
     for (const Rect& s : v.spaces) poly(s, "SPARE");
 
-    // HEADER
+}
+
+void writeHeader(Dxf& d, const Brief& brief, const Footprint& fp) {
     d.pair(0, "SECTION");
     d.pair(2, "HEADER");
     d.pair(9, "$ACADVER");
@@ -168,26 +170,29 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     d.pair(5, "FFFFF");
     d.pair(0, "ENDSEC");
 
-    // TABLES
-    auto tableStart = [&](const std::string& name, const std::string& h, int count) {
-        d.pair(0, "TABLE");
-        d.pair(2, name);
-        d.pair(5, h);
-        d.pair(330, "0");
-        d.pair(100, "AcDbSymbolTable");
-        d.pair(70, count);
-    };
-    auto entry = [&](const std::string& type, const std::string& h, const std::string& owner, const std::string& sub) {
-        d.pair(0, type);
-        d.pair(5, h);
-        d.pair(330, owner);
-        d.pair(100, "AcDbSymbolTableRecord");
-        d.pair(100, sub);
-    };
-    d.pair(0, "SECTION");
-    d.pair(2, "TABLES");
-    tableStart("VPORT", hVportTable, 1);
-    entry("VPORT", hActiveVport, hVportTable, "AcDbViewportTableRecord");
+}
+
+void tableStart(Dxf& d, const std::string& name, const std::string& h, int count) {
+    d.pair(0, "TABLE");
+    d.pair(2, name);
+    d.pair(5, h);
+    d.pair(330, "0");
+    d.pair(100, "AcDbSymbolTable");
+    d.pair(70, count);
+}
+
+void tableEntry(Dxf& d, const std::string& type, const std::string& h, const std::string& owner, const std::string& sub) {
+    d.pair(0, type);
+    d.pair(5, h);
+    d.pair(330, owner);
+    d.pair(100, "AcDbSymbolTableRecord");
+    d.pair(100, sub);
+}
+
+// The view a reader opens on: the whole footprint.
+void writeViewport(Dxf& d, const Footprint& fp) {
+    tableStart(d, "VPORT", hVportTable, 1);
+    tableEntry(d, "VPORT", hActiveVport, hVportTable, "AcDbViewportTableRecord");
     d.pair(2, "*ACTIVE");
     d.pair(70, 0);
     d.real(10, 0); d.real(20, 0); d.real(11, 1); d.real(21, 1);
@@ -201,21 +206,14 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     d.real(110, 0); d.real(120, 0); d.real(130, 0); d.real(111, 1); d.real(121, 0); d.real(131, 0);
     d.real(112, 0); d.real(122, 1); d.real(132, 0); d.pair(79, 0); d.real(146, 0);
     d.pair(0, "ENDTAB");
-    tableStart("LTYPE", hLtypeTable, 3);
-    for (const auto& [h, name] : {std::pair{hByBlock, "ByBlock"}, {hByLayer, "ByLayer"}, {hContinuous, "Continuous"}}) {
-        entry("LTYPE", h, hLtypeTable, "AcDbLinetypeTableRecord");
-        d.pair(2, name);
-        d.pair(70, 0);
-        d.pair(3, name == std::string("Continuous") ? "Solid line" : "");
-        d.pair(72, 65);
-        d.pair(73, 0);
-        d.real(40, 0);
-    }
-    d.pair(0, "ENDTAB");
-    tableStart("LAYER", hLayerTable, static_cast<int>(layers.size()));
+}
+
+// One layer per category, OUTLINE, SPARE, LABELS (and WALLS).
+void writeLayers(Dxf& d, const std::set<std::string>& layers) {
+    tableStart(d, "LAYER", hLayerTable, static_cast<int>(layers.size()));
     int colour = 1;
     for (const std::string& name : layers) {
-        entry("LAYER", d.handle(), hLayerTable, "AcDbLayerTableRecord");
+        tableEntry(d, "LAYER", d.handle(), hLayerTable, "AcDbLayerTableRecord");
         d.pair(2, name);
         d.pair(70, 0);
         d.pair(62, name == "0" ? 7 : name == "OUTLINE" ? 7 : name == "LABELS" ? 7 : name == "SPARE" ? 8 : (colour++ % 6) + 1);
@@ -224,8 +222,26 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
         d.pair(390, "0");
     }
     d.pair(0, "ENDTAB");
-    tableStart("STYLE", hStyleTable, 1);
-    entry("STYLE", hStandardStyle, hStyleTable, "AcDbTextStyleTableRecord");
+}
+
+void writeTables(Dxf& d, const Footprint& fp, const std::set<std::string>& layers) {
+    d.pair(0, "SECTION");
+    d.pair(2, "TABLES");
+    writeViewport(d, fp);
+    tableStart(d, "LTYPE", hLtypeTable, 3);
+    for (const auto& [h, name] : {std::pair{hByBlock, "ByBlock"}, {hByLayer, "ByLayer"}, {hContinuous, "Continuous"}}) {
+        tableEntry(d, "LTYPE", h, hLtypeTable, "AcDbLinetypeTableRecord");
+        d.pair(2, name);
+        d.pair(70, 0);
+        d.pair(3, name == std::string("Continuous") ? "Solid line" : "");
+        d.pair(72, 65);
+        d.pair(73, 0);
+        d.real(40, 0);
+    }
+    d.pair(0, "ENDTAB");
+    writeLayers(d, layers);
+    tableStart(d, "STYLE", hStyleTable, 1);
+    tableEntry(d, "STYLE", hStandardStyle, hStyleTable, "AcDbTextStyleTableRecord");
     d.pair(2, "Standard");
     d.pair(70, 0);
     d.real(40, 0);
@@ -236,12 +252,12 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     d.pair(3, "txt");
     d.pair(4, "");
     d.pair(0, "ENDTAB");
-    tableStart("VIEW", hViewTable, 0);
+    tableStart(d, "VIEW", hViewTable, 0);
     d.pair(0, "ENDTAB");
-    tableStart("UCS", hUcsTable, 0);
+    tableStart(d, "UCS", hUcsTable, 0);
     d.pair(0, "ENDTAB");
-    tableStart("APPID", hAppidTable, 1);
-    entry("APPID", hAcadAppid, hAppidTable, "AcDbRegAppTableRecord");
+    tableStart(d, "APPID", hAppidTable, 1);
+    tableEntry(d, "APPID", hAcadAppid, hAppidTable, "AcDbRegAppTableRecord");
     d.pair(2, "ACAD");
     d.pair(70, 0);
     d.pair(0, "ENDTAB");
@@ -261,9 +277,9 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     d.pair(70, 0);
     d.pair(340, hStandardStyle);
     d.pair(0, "ENDTAB");
-    tableStart("BLOCK_RECORD", hBlockRecordTable, 2);
+    tableStart(d, "BLOCK_RECORD", hBlockRecordTable, 2);
     for (const auto& [h, name] : {std::pair{hModel, "*Model_Space"}, {hPaper, "*Paper_Space"}}) {
-        entry("BLOCK_RECORD", h, hBlockRecordTable, "AcDbBlockTableRecord");
+        tableEntry(d, "BLOCK_RECORD", h, hBlockRecordTable, "AcDbBlockTableRecord");
         d.pair(2, name);
         d.pair(340, "0");
         d.pair(70, 0);
@@ -273,7 +289,9 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     d.pair(0, "ENDTAB");
     d.pair(0, "ENDSEC");
 
-    // BLOCKS
+}
+
+void writeBlocks(Dxf& d) {
     d.pair(0, "SECTION");
     d.pair(2, "BLOCKS");
     for (const auto& [hb, he, owner, name] :
@@ -300,9 +318,10 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     }
     d.pair(0, "ENDSEC");
 
-    std::string out = d.text();
-    out += "0\nSECTION\n2\nENTITIES\n" + e.text() + "0\nENDSEC\n";
-    // OBJECTS: the root dictionary and the group dictionary.
+}
+
+// OBJECTS: the root dictionary and the group dictionary, then the end.
+std::string objectsSection() {
     Dxf o;
     o.pair(0, "SECTION");
     o.pair(2, "OBJECTS");
@@ -320,7 +339,23 @@ std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& 
     o.pair(281, 1);
     o.pair(0, "ENDSEC");
     o.pair(0, "EOF");
-    return out + o.text();
+    return o.text();
+}
+
+} // namespace
+
+std::string planDxf(const Brief& brief, const Footprint& fp, const PlanVariant& v, const DxfOptions& options) {
+    Dxf d;
+    std::set<std::string> layers{"0", "OUTLINE", "SPARE", "LABELS"};
+    for (const Room& r : brief.rooms) layers.insert(dxfLayerOf(r.category));
+    if (options.wallThickness > 0) layers.insert("WALLS");
+
+    Dxf e;
+    writeEntities(d, e, brief, fp, v, options);
+    writeHeader(d, brief, fp);
+    writeTables(d, fp, layers);
+    writeBlocks(d);
+    return d.text() + "0\nSECTION\n2\nENTITIES\n" + e.text() + "0\nENDSEC\n" + objectsSection();
 }
 
 } // namespace abut

@@ -1,10 +1,12 @@
 // SPDX-License-Identifier: MIT
 #include "io/project_io.h"
 
+#include "brief/brief_rules.h"
 #include "detail/json_locate.h"
 #include "io/atomic_file.h"
 
 #include <cmath>
+#include <limits>
 #include <set>
 #include <sstream>
 #include <nlohmann/json.hpp>
@@ -58,20 +60,10 @@ public:
             return std::nullopt;
         }
         const double d = v.get<double>();
-        if (!std::isfinite(d)) {
-            error(ptr, std::string(what) + " must be a finite number");
-            return std::nullopt;
-        }
-        if (d <= 0.0 && (!atLeast || (*atLeast > 0.0 && *atLeast < 1.0))) {
-            error(ptr, std::string(what) + " must be greater than 0, got " + formatNumber(d));
-            return std::nullopt;
-        }
-        if (atLeast && d < *atLeast) {
-            error(ptr, std::string(what) + " must be at least " + formatNumber(*atLeast) + ", got " + formatNumber(d));
-            return std::nullopt;
-        }
-        if (atMost && d > *atMost) {
-            error(ptr, std::string(what) + " must be at most " + formatNumber(*atMost) + ", got " + formatNumber(d));
+        const std::string problem =
+            numberProblem(d, what, atLeast.value_or(minLength), atMost.value_or(std::numeric_limits<double>::max()));
+        if (!problem.empty()) {
+            error(ptr, problem);
             return std::nullopt;
         }
         return d;
@@ -93,15 +85,9 @@ public:
                                     const char* what) {
         auto s = string(obj, key, ptr, what);
         if (!s) return s;
-        for (std::size_t i = 0; i < s->size(); ++i) {
-            const unsigned char c = static_cast<unsigned char>((*s)[i]);
-            if (c < 0x20 || c == 0x7F) {
-                char code[8];
-                std::snprintf(code, sizeof code, "U+%04X", c);
-                error(ptr, std::string(what) + " holds a control character (" + code + ") at character " +
-                               std::to_string(i + 1) + "; use plain text on one line");
-                return std::nullopt;
-            }
+        if (const std::string problem = textProblem(*s, what); !problem.empty()) {
+            error(ptr, problem);
+            return std::nullopt;
         }
         return s;
     }
@@ -124,8 +110,7 @@ OrderedJson unknownOf(const OrderedJson& obj, std::initializer_list<const char*>
 }
 
 // {"x", "y", "width", "depth"} inside the footprint's bounding rectangle.
-std::optional<Placement> readPlacement(Reader& r, const OrderedJson& j, const std::string& ptr, const char* what,
-                                       const Footprint& fp) {
+std::optional<Placement> readPlacement(Reader& r, const OrderedJson& j, const std::string& ptr, const char* what) {
     if (!j.is_object()) {
         r.error(ptr, std::string(what) + " must be an object with \"x\", \"y\", \"width\" and \"depth\", got " +
                          describe(j));
@@ -150,13 +135,6 @@ std::optional<Placement> readPlacement(Reader& r, const OrderedJson& j, const st
         (key[0] == 'x' ? p.x : key[0] == 'y' ? p.y : key[0] == 'w' ? p.width : p.depth) = *v;
     }
     if (!ok) return std::nullopt;
-    const double tol = 1e-9 * std::max(fp.width, fp.depth);
-    if (p.x + p.width > fp.width + tol || p.y + p.depth > fp.depth + tol) {
-        r.error(ptr, std::string(what) + " reaches past the footprint (" + formatNumber(fp.width) + " × " +
-                         formatNumber(fp.depth) + "): it ends at x " + formatNumber(p.x + p.width) + ", y " +
-                         formatNumber(p.y + p.depth));
-        return std::nullopt;
-    }
     return p;
 }
 
@@ -203,30 +181,23 @@ void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& br
             }
         }
     }
+    std::optional<Placement> fixed;
     if (j.contains("fixed")) {
         if (!brief.footprint)
             r.error(ptr + "/fixed", "a fixed room needs a footprint to be placed in; give \"footprint\" a width and depth");
-        else if (auto p = readPlacement(r, j.at("fixed"), ptr + "/fixed", "fixed", *brief.footprint)) {
-            const double tol = 1e-6 * std::max(brief.footprint->width, brief.footprint->depth);
-            bool clear = true;
-            for (std::size_t k = 0; k < brief.footprint->cutouts.size() && clear; ++k)
-                if (overlaps(*p, brief.footprint->cutouts[k], tol)) {
-                    r.error(ptr + "/fixed", "room \"" + room.id + "\" is fixed over cut-out " + std::to_string(k + 1) +
-                                                " of the footprint, which is not building");
-                    clear = false;
-                }
-            for (const Room& other : brief.rooms)
-                if (clear && other.fixed && overlaps(*p, *other.fixed, tol)) {
-                    r.error(ptr + "/fixed", "room \"" + room.id + "\" is fixed where room \"" + other.id +
-                                                "\" is fixed; two rooms cannot share floor");
-                    clear = false;
-                }
-            if (clear) room.fixed = *p;
-        }
+        else
+            fixed = readPlacement(r, j.at("fixed"), ptr + "/fixed", "fixed");
     }
     room.unknownFields = unknownOf(
         j, {"id", "name", "area", "minWidth", "maxAspect", "areaTolerance", "category", "facade", "fixed"});
     brief.rooms.push_back(std::move(room));
+    if (fixed) {
+        brief.rooms.back().fixed = fixed;
+        if (const std::string problem = fixedRoomProblem(brief, brief.rooms.size() - 1); !problem.empty()) {
+            r.error(ptr + "/fixed", problem);
+            brief.rooms.back().fixed.reset();
+        }
+    }
 }
 
 void readCutouts(Reader& r, const OrderedJson& list, Footprint& fp) {
@@ -234,28 +205,23 @@ void readCutouts(Reader& r, const OrderedJson& list, Footprint& fp) {
         r.error("/footprint/cutouts", "cutouts must be a list of rectangles {\"x\", \"y\", \"width\", \"depth\"}");
         return;
     }
-    const double tol = 1e-6 * std::max(fp.width, fp.depth);
+    std::vector<std::string> where; // the pointer of each cut-out kept
     for (std::size_t k = 0; k < list.size(); ++k) {
         const std::string ptr = "/footprint/cutouts/" + std::to_string(k);
-        auto c = readPlacement(r, list[k], ptr, "cut-out", fp);
+        auto c = readPlacement(r, list[k], ptr, "cut-out");
         if (!c) continue;
-        bool clear = true;
-        for (std::size_t i = 0; i < fp.cutouts.size() && clear; ++i)
-            if (overlaps(*c, fp.cutouts[i], tol)) {
-                r.error(ptr, "cut-out " + std::to_string(k + 1) + " overlaps cut-out " + std::to_string(i + 1) +
-                                 "; draw the part they share once");
-                clear = false;
-            }
-        if (!clear) continue;
         fp.cutouts.push_back(*c);
-        if (fp.netArea() <= tol * tol) {
-            r.error(ptr, "the cut-outs leave nothing of the footprint to build on");
+        if (const std::string problem = cutoutProblem(fp, fp.cutouts.size() - 1); !problem.empty()) {
+            r.error(ptr, problem);
             fp.cutouts.pop_back();
-        } else if (!isConnected(fp)) {
-            r.error(ptr, "cut-out " + std::to_string(k + 1) +
-                             " splits the footprint in two; a plan is one piece (make it smaller or move it to an edge)");
-            fp.cutouts.pop_back();
+        } else {
+            where.push_back(ptr);
         }
+    }
+    std::size_t which = 0;
+    if (const std::string problem = splitProblem(fp, &which); !problem.empty()) {
+        r.error(where[which], problem);
+        fp.cutouts.resize(which);
     }
 }
 
@@ -336,9 +302,9 @@ void readBody(Reader& r, const OrderedJson& doc, Brief& brief) {
     }
     if (doc.contains("doorWidth"))
         if (auto w = r.positive(doc, "doorWidth", "/doorWidth", "doorWidth", minLength, maxLength)) {
-            if (brief.footprint && *w > std::min(brief.footprint->width, brief.footprint->depth))
-                r.error("/doorWidth", "doorWidth " + formatNumber(*w) + " is wider than the footprint's shorter side (" +
-                                          formatNumber(std::min(brief.footprint->width, brief.footprint->depth)) + ")");
+            if (const std::string problem = brief.footprint ? doorWidthProblem(*w, *brief.footprint) : std::string();
+                !problem.empty())
+                r.error("/doorWidth", problem);
             else
                 brief.doorWidth = *w;
         }

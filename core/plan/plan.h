@@ -102,19 +102,7 @@ struct PlanOptions {
     bool relaxations = true;         // work out what must give for the best variant (plan/relaxations.h)
 };
 
-// Score of a variant (lower is better), documented for planners:
-//   1000 per dropped 'must' adjacency (a door without a door-wide wall
-//        counts as dropped), so a plan that keeps every 'must' always ranks
-//        above one that does not
-//   1000 per room not exactly where it is fixed
-//   + 1 per requirement missed: a room off its area band, narrower than its
-//       minimum width, more elongated than its aspect limit, or missing a
-//       facade side it wishes for
-//   + worst relative area error + 0.25 × mean relative area error
-//   + 0.2 per dropped 'should' adjacency
-//   + 0.1 × Σ (aspect − maxAspect) over rooms more elongated than allowed
-//   + 0.2 × spare-space share of the footprint
-//   + 0.01 × interior wall length / √(footprint area)   (less wall, less cost)
+// Score of a variant (lower is better): planScore (search/score.h) of its rectangles.
 double variantScore(const Brief& brief, const Footprint& footprint, const PlanVariant& v);
 
 } // namespace abut

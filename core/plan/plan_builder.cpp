@@ -2,12 +2,14 @@
 #include "plan/plan_builder.h"
 
 #include "plan/graph_first.h"
+#include "plan/plan_route.h"
 #include "brief/footprint_check.h"
 #include "plan/relaxations.h"
 #include "plan/variant_key.h"
 
 #include "label/labeling_lattice.h"
 #include "search/plan_search.h"
+#include "search/score.h"
 
 #include <algorithm>
 #include <set>
@@ -61,7 +63,7 @@ void updateMetrics(const Brief& brief, const Footprint& fp, PlanVariant& out, co
     std::sort(out.dropped.begin(), out.dropped.end());
     out.metrics = m;
     out.misses = report.counts;
-    out.score = variantScore(brief, fp, out);
+    out.score = planScore(brief, fp, out.rooms, out.spaces, report);
 }
 
 } // namespace
@@ -93,25 +95,7 @@ PlanVariant applySizing(const Brief& brief, const Footprint& fp, const PlanVaria
 
 
 double variantScore(const Brief& brief, const Footprint& fp, const PlanVariant& v) {
-    double score = v.metrics.worstAreaError + 0.25 * v.metrics.meanAreaError;
-    for (int d : v.dropped) score += brief.adjacencies[d].priority == Priority::Must ? 1000.0 : 0.2;
-    const RequirementMisses& m = v.misses;
-    score += 1.0 * (m.area + m.minWidth + m.maxAspect + m.facade);
-    score += 1000.0 * m.fixed; // a room away from where it is fixed weighs like a dropped 'must'
-    for (std::size_t i = 0; i < v.rooms.size(); ++i) {
-        const Rect& r = v.rooms[i];
-        const double aspect = std::max(r.width(), r.depth()) / std::min(r.width(), r.depth());
-        if (brief.rooms[i].maxAspect && aspect > *brief.rooms[i].maxAspect)
-            score += 0.1 * (aspect - *brief.rooms[i].maxAspect);
-    }
-    const double area = fp.width * fp.depth;
-    score += 0.2 * v.metrics.spareArea / area;
-    double walls = 0;
-    for (const Rect& r : v.rooms) walls += r.width() + r.depth();
-    for (const Rect& r : v.spaces) walls += r.width() + r.depth();
-    walls -= fp.width + fp.depth; // each interior wall is counted from both sides; the outline once
-    score += 0.01 * walls / std::sqrt(area);
-    return score;
+    return planScore(brief, fp, v.rooms, v.spaces, measureRequirements(brief, fp, v.rooms));
 }
 
 PlanVariant layoutVariant(const Brief& brief, const ExtendedGraph& x, const RegularEdgeLabeling& rel,
@@ -200,43 +184,6 @@ StageCheck checkVariant(const Brief& brief, const Footprint& fp, const PlanVaria
     return {};
 }
 
-namespace {
-
-// A sized plan found by the search, as a variant.
-PlanVariant variantOf(const Brief& brief, const Footprint& fp, const SearchPlan& found) {
-    PlanVariant v;
-    v.extended = found.extended;
-    v.labeling = found.labeling;
-    v = applySizing(brief, fp, v, found.sized);
-    v.oneSided = isOneSided(v.extended, v.labeling);
-    return v;
-}
-
-// Streams the search's progress and improvements to a PlanMonitor.
-class MonitorVisitor : public SearchVisitor {
-public:
-    MonitorVisitor(const Brief& brief, const Footprint& fp, const PlanMonitor* monitor, double from, double to)
-        : brief_(brief), fp_(fp), monitor_(monitor), from_(from), to_(to) {}
-    bool onRound(const SearchProgress& p) override {
-        if (!monitor_ || !monitor_->progress) return true;
-        stopped_ = !monitor_->progress(from_ + (to_ - from_) * p.done, p.usable ? "improving" : "searching");
-        return !stopped_;
-    }
-    void onImproved(const SearchPlan& plan) override {
-        if (monitor_ && monitor_->found) monitor_->found(variantOf(brief_, fp_, plan));
-    }
-    bool stopped() const { return stopped_; }
-
-private:
-    const Brief& brief_;
-    const Footprint& fp_;
-    const PlanMonitor* monitor_;
-    double from_, to_;
-    bool stopped_ = false;
-};
-
-} // namespace
-
 void reconcileDiagnostics(const Brief& brief, const PlanVariant& best, std::vector<Diagnostic>& diagnostics) {
     auto describe = [&](int k) {
         const Adjacency& a = brief.adjacencies[k];
@@ -312,133 +259,124 @@ std::string heldPlacesSummary(const Brief& given, const std::vector<int>& away, 
 
 } // namespace
 
-Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor* monitor) {
-    const Brief brief = plannedBrief(given); // `surplus: spread` grows the targets to fill the footprint
+namespace {
+
+// One computation of a plan: the brief as planned, the clock, and why it
+// stopped (the caller asked, or the time limit ran out: what was found stands).
+struct Planning {
+    const Brief& given;
+    const Brief brief; // plannedBrief(given): cut-outs as rooms held in place, targets spread
+    const PlanOptions& options;
+    const PlanMonitor* monitor;
     Plan plan;
-    const auto started = std::chrono::steady_clock::now();
-    auto elapsed = [&] { return std::chrono::duration<double>(std::chrono::steady_clock::now() - started).count(); };
-    bool stopped = false;  // the caller asked to stop
-    bool outOfTime = false; // the time limit ended the work: what was found stands
-    auto keepGoing = [&](double done, const char* step) {
+    std::chrono::steady_clock::time_point started = std::chrono::steady_clock::now();
+    bool stopped = false, outOfTime = false;
+
+    double elapsed() const {
+        return std::chrono::duration<double>(std::chrono::steady_clock::now() - started).count();
+    }
+    bool timeLeft() const { return options.timeLimit <= 0 || elapsed() < options.timeLimit; }
+    // Reports progress; false once the caller asks to stop (time limits are
+    // the routes' own: PlanRouteContext::timeLimit).
+    bool report(double done, const char* step) {
         if (!stopped && monitor && monitor->progress && !monitor->progress(done, step)) stopped = true;
-        if (options.timeLimit > 0 && elapsed() > options.timeLimit) outOfTime = true;
-        return !stopped && !outOfTime;
-    };
-    plan.units = brief.units;
-    plan.footprint = brief.effectiveFootprint();
-    // A room no rectangle beside the cut-outs and fixed rooms can hold: proven, nothing to search.
-    for (const Diagnostic& d : footprintProblems(given))
-        if (d.code == DiagnosticCode::NoRectangleFits) {
-            plan.status = PlanStatus::NoPlan;
-            plan.summary = "No rectangular plan exists: " + d.message;
-            plan.diagnostics.push_back(d);
-            return plan;
-        }
-    AugmentOptions augment;
-    augment.poleRouteGraphs = std::max(1, options.augmentations);
-    const AugmentResult aug = buildExtendedGraph(brief, augment);
-    plan.diagnostics = aug.diagnostics;
-    if (aug.status == AugmentStatus::Empty) {
-        plan.status = PlanStatus::NoPlan;
-        plan.summary = aug.summary;
-        return plan;
+        return !stopped;
     }
-    if (aug.status == AugmentStatus::Internal) {
-        plan.status = PlanStatus::Internal;
-        plan.summary = aug.summary;
-        return plan;
-    }
-    // When the brief names most contacts ('must' adjacencies ≥ 1.6 per room,
-    // as in a brief read off a drawn plan), its graph nearly is the extended
-    // graph: the graph-first pipeline goes straight to it and comes first.
-    // Otherwise the plan search leads and that pipeline is the fallback.
-    int musts = 0;
-    for (const Adjacency& a : brief.adjacencies) musts += a.priority == Priority::Must;
-    const bool dense = brief.rooms.size() >= 4 && musts >= 1.6 * static_cast<double>(brief.rooms.size());
-    auto anyUsable = [&] {
-        for (const PlanVariant& v : plan.variants)
-            if (v.sized && v.misses.usable()) return true;
+};
+
+// Runs one route in the share [from, to] of the progress; its variants join
+// the plan's. False on an internal error (the plan says so).
+bool runRoute(Planning& run, const PlanRoute& route, const AugmentResult& aug, double from, double to) {
+    PlanRouteContext c{run.brief, aug, run.options, run.monitor, run.plan.footprint,
+                   run.options.timeLimit > 0 ? std::max(1e-3, run.options.timeLimit - run.elapsed()) : 0.0,
+                   [&run, from, to](double done, const char* step) { return run.report(from + (to - from) * done, step); }};
+    const double began = run.elapsed();
+    PlanRouteResult r = route.run(c);
+    if (!run.timeLeft()) run.outOfTime = true;
+    if (r.status == PlanRouteResult::Status::Internal) {
+        run.plan.status = PlanStatus::Internal;
+        run.plan.summary = r.problem;
         return false;
-    };
-    auto runGraphFirst = [&](bool anneal, double from, double to) {
-        auto going = [&](double done, const char* step) { return keepGoing(from + (to - from) * done, step); };
-        return graphFirstVariants(brief, aug, options, plan, going, anneal && options.improvedCandidates > 0, monitor);
-    };
+    }
+    if (r.firstUsableSeconds >= 0 && run.plan.stats.firstUsableSeconds < 0)
+        run.plan.stats.firstUsableSeconds = began + r.firstUsableSeconds;
+    run.plan.stats.moves += r.moves;
+    for (PlanVariant& v : r.variants) run.plan.variants.push_back(std::move(v));
+    return true;
+}
+
+bool anyUsable(const Plan& plan) {
+    for (const PlanVariant& v : plan.variants)
+        if (v.sized && v.misses.usable()) return true;
+    return false;
+}
+
+// The routes in order: when the brief names most contacts ('must'
+// adjacencies ≥ 1.6 per room, as in a brief read off a drawn plan), its graph
+// nearly is the extended graph, so the graph-first route goes first and the
+// search follows if it finds nothing usable; otherwise the search leads and
+// the graph-first route is the fallback.
+bool runRoutes(Planning& run, const AugmentResult& aug) {
+    int musts = 0;
+    for (const Adjacency& a : run.brief.adjacencies) musts += a.priority == Priority::Must;
+    const bool dense = run.brief.rooms.size() >= 4 && musts >= 1.6 * static_cast<double>(run.brief.rooms.size());
+    const auto search = makeSearchRoute();
+    const auto graphFirst = makeGraphFirstRoute(true);
     if (dense) {
-        if (!runGraphFirst(true, 0.0, 0.5)) return plan;
-        if (anyUsable()) plan.stats.firstUsableSeconds = elapsed();
+        if (!runRoute(run, *graphFirst, aug, 0.0, 0.5)) return false;
+        if (!anyUsable(run.plan) && !run.stopped && run.timeLeft()) return runRoute(run, *search, aug, 0.5, 1.0);
+        return true;
     }
-    if (!anyUsable() && !stopped && (options.timeLimit <= 0 || elapsed() < options.timeLimit)) {
-        // The plan search: whole plans, arranged and sized together.
-        SearchOptions search;
-        search.seed = options.seed;
-        search.threads = options.threads;
-        search.timeLimit = options.timeLimit > 0 ? options.timeLimit - elapsed() : 0;
-        search.moves = options.searchMoves;
-        search.variantFlips = options.variantFlips;
-        search.keep = std::max(1, options.variants);
-        search.anyWall = options.anyWall;
-        search.spareMinimum = options.spareMinimum;
-        search.grid = options.grid;
-        const double from = dense ? 0.5 : 0.0;
-        MonitorVisitor visitor(brief, plan.footprint, monitor, from, dense ? 1.0 : 0.85);
-        const SearchResult found = searchPlans(brief, search, &visitor);
-        stopped = visitor.stopped();
-        if (found.firstUsableSeconds >= 0) plan.stats.firstUsableSeconds = elapsed() - found.seconds + found.firstUsableSeconds;
-        plan.stats.moves = found.moves;
-        for (const SearchPlan& sp : found.plans) {
-            PlanVariant v = variantOf(brief, plan.footprint, sp);
-            const StageCheck check = checkVariant(brief, plan.footprint, v);
-            if (!check.ok) {
-                plan.status = PlanStatus::Internal;
-                plan.summary = "Internal error: a searched plan failed its check (" + check.problem + "). Please report this brief.";
-                return plan;
-            }
-            plan.variants.push_back(std::move(v));
-        }
-        // The graph-first pipeline as a fallback.
-        if (!dense && found.status != SearchStatus::Usable && !stopped &&
-            (options.timeLimit <= 0 || elapsed() < options.timeLimit))
-            if (!runGraphFirst(true, 0.85, 1.0)) return plan;
-    }
-    if (plan.variants.empty()) { // stopped before the first layout
-        plan.status = stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
-        plan.summary = stopped     ? "Stopped before any variant was found."
-                       : outOfTime ? "The time limit ended the work before any variant was found."
-                                   : aug.summary;
-        return plan;
-    }
-    // A variant with a room on a cut-out, or a fixed room moved, is no plan
-    // of this building: a fixed room stays exactly where it is fixed.
+    if (!runRoute(run, *search, aug, 0.0, 0.85)) return false;
+    if (!anyUsable(run.plan) && !run.stopped && run.timeLeft()) return runRoute(run, *graphFirst, aug, 0.85, 1.0);
+    return true;
+}
+
+// A variant with a room on a cut-out, or a fixed room moved, is no plan of
+// this building: a fixed room stays exactly where it is fixed. False when
+// none is left (the plan says why).
+bool keepHeldPlaces(Planning& run) {
+    Plan& plan = run.plan;
     const double tol = 1e-6 * std::max(plan.footprint.width, plan.footprint.depth);
     const std::size_t before = plan.variants.size();
-    std::vector<int> away(brief.rooms.size(), 0);
+    std::vector<int> away(run.brief.rooms.size(), 0);
     std::erase_if(plan.variants, [&](const PlanVariant& v) {
         bool moved = false;
-        for (std::size_t i = 0; i < brief.rooms.size() && i < v.rooms.size(); ++i)
-            if (brief.rooms[i].fixed && !inPlace(brief.rooms[i], v.rooms[i], tol)) {
+        for (std::size_t i = 0; i < run.brief.rooms.size() && i < v.rooms.size(); ++i)
+            if (run.brief.rooms[i].fixed && !inPlace(run.brief.rooms[i], v.rooms[i], tol)) {
                 ++away[i];
                 moved = true;
             }
         return moved;
     });
-    if (plan.variants.empty()) {
-        plan.status = stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
-        plan.summary = heldPlacesSummary(given, away, before);
-        return plan;
-    }
-    rankVariants(brief, plan.footprint, plan.variants);
-    // One variant per arrangement of rooms (the same arrangement is reached
-    // from graphs that differ only by an added contact, or sized twice), the
-    // better ranked kept: the planner compares arrangements, not sizings.
+    if (!plan.variants.empty()) return true;
+    plan.status = run.stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
+    plan.summary = heldPlacesSummary(run.given, away, before);
+    return false;
+}
+
+// One variant per arrangement of rooms (the same arrangement is reached from
+// graphs that differ only by an added contact, or sized twice), the better
+// ranked kept: the planner compares arrangements, not sizings.
+void rankAndKeep(Planning& run) {
+    Plan& plan = run.plan;
+    rankVariants(run.brief, plan.footprint, plan.variants);
     std::vector<PlanVariant> kept;
     std::set<std::string> keys;
     for (PlanVariant& v : plan.variants) {
-        if (static_cast<int>(kept.size()) >= options.variants) break;
-        if (keys.insert(variantKey(brief, v)).second) kept.push_back(std::move(v));
+        if (static_cast<int>(kept.size()) >= run.options.variants) break;
+        if (keys.insert(variantKey(run.brief, v)).second) kept.push_back(std::move(v));
     }
     plan.variants = std::move(kept);
     for (std::size_t i = 0; i < plan.variants.size(); ++i) plan.variants[i].rank = static_cast<int>(i) + 1;
+}
+
+// Status, diagnostics and summary, spoken of the best variant rather than of
+// the augmentation's graph: it keeps everything, every 'must' (some 'should'
+// not realised), or the augmentation says why it cannot.
+void summarize(Planning& run, const AugmentResult& aug) {
+    Plan& plan = run.plan;
+    const Brief& brief = run.brief;
     const PlanVariant& v = plan.variants.front();
     reconcileDiagnostics(brief, v, plan.diagnostics);
     bool mustLost = !v.unmetFacade.empty();
@@ -448,18 +386,10 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
                                     std::to_string(v.metrics.shortDoorWalls) +
                                         " door adjacency(ies) get less than a door's width of wall in the footprint.",
                                     {}, {}});
-    // What must give, for the best variant: a few re-sizings per requirement it misses.
-    // Bounded: a tenth of the time limit (0.2 to 2 s), 1 s without one.
-    if (!stopped && options.relaxations)
-        plan.variants.front().relaxations = relaxationsFor(
-            given, plan.footprint, v, 12, options.timeLimit > 0 ? std::clamp(0.1 * options.timeLimit, 0.2, 2.0) : 1.0);
-    plan.status = stopped ? PlanStatus::Cancelled : mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
-    // The summary speaks of the best variant, not of the augmentation's graph:
-    // it keeps everything, every 'must' (some 'should' not realised), or the
-    // augmentation says why it cannot.
+    plan.status = run.stopped ? PlanStatus::Cancelled : mustLost ? PlanStatus::Compromised : PlanStatus::Ok;
     int shouldsDropped = 0, givenUp = static_cast<int>(v.unmetFacade.size());
     for (int d : v.dropped) (brief.adjacencies[d].priority == Priority::Should ? shouldsDropped : givenUp) += 1;
-    plan.summary = stopped ? "Stopped: " + std::to_string(plan.variants.size()) + " variant(s) found so far."
+    plan.summary = run.stopped ? "Stopped: " + std::to_string(plan.variants.size()) + " variant(s) found so far."
                    : mustLost
                        ? aug.status == AugmentStatus::Compromised
                              ? aug.summary
@@ -469,9 +399,66 @@ Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor
                        ? std::string("A rectangular plan exists with every adjacency and facade wish.")
                        : "A rectangular plan exists with every 'must' adjacency and facade wish; " +
                              std::to_string(shouldsDropped) + " 'should' adjacency(ies) not realised in the best variant.";
-    plan.stats.seconds = elapsed();
-    if (!stopped) keepGoing(1.0, "done");
-    return plan;
+}
+
+// Everything but the relaxations. `run.plan` holds the result.
+void plan(Planning& run) {
+    Plan& plan = run.plan;
+    plan.units = run.brief.units;
+    plan.footprint = run.brief.effectiveFootprint();
+    // A room no rectangle beside the cut-outs and fixed rooms can hold: proven, nothing to search.
+    for (const Diagnostic& d : footprintProblems(run.given))
+        if (d.code == DiagnosticCode::NoRectangleFits) {
+            plan.status = PlanStatus::NoPlan;
+            plan.summary = "No rectangular plan exists: " + d.message;
+            plan.diagnostics.push_back(d);
+            return;
+        }
+    AugmentOptions augment;
+    augment.poleRouteGraphs = std::max(1, run.options.augmentations);
+    const AugmentResult aug = buildExtendedGraph(run.brief, augment);
+    plan.diagnostics = aug.diagnostics;
+    if (aug.status == AugmentStatus::Empty || aug.status == AugmentStatus::Internal) {
+        plan.status = aug.status == AugmentStatus::Empty ? PlanStatus::NoPlan : PlanStatus::Internal;
+        plan.summary = aug.summary;
+        return;
+    }
+    if (!runRoutes(run, aug)) return;
+    if (plan.variants.empty()) { // stopped before the first layout
+        plan.status = run.stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
+        plan.summary = run.stopped     ? "Stopped before any variant was found."
+                       : run.outOfTime ? "The time limit ended the work before any variant was found."
+                                       : aug.summary;
+        return;
+    }
+    if (!keepHeldPlaces(run)) return;
+    rankAndKeep(run);
+    summarize(run, aug);
+}
+
+} // namespace
+
+Plan planVariants(const Brief& given, const PlanOptions& options, const PlanMonitor* monitor) {
+    Planning run{given, plannedBrief(given), options, monitor, {}};
+    plan(run);
+    run.plan.stats.seconds = run.elapsed();
+    return std::move(run.plan);
+}
+
+Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor* monitor) {
+    Planning run{given, plannedBrief(given), options, monitor, {}};
+    plan(run);
+    Plan& plan = run.plan;
+    const bool planned = !plan.variants.empty() && plan.status != PlanStatus::Internal;
+    // What must give, for the best variant: a few re-sizings per requirement it misses.
+    // Bounded: a tenth of the time limit (0.2 to 2 s), 1 s without one.
+    if (planned && !run.stopped && options.relaxations)
+        plan.variants.front().relaxations =
+            relaxationsFor(given, plan.footprint, plan.variants.front(), 12,
+                           options.timeLimit > 0 ? std::clamp(0.1 * options.timeLimit, 0.2, 2.0) : 1.0);
+    plan.stats.seconds = run.elapsed();
+    if (planned && !run.stopped) run.report(1.0, "done");
+    return std::move(plan);
 }
 
 void rankVariants(const Brief& brief, const Footprint& fp, std::vector<PlanVariant>& variants) {

@@ -43,6 +43,10 @@ struct PlanMonitor {
 
 Plan buildPlan(const Brief& brief, const PlanOptions& options = {}, const PlanMonitor* monitor = nullptr);
 
+// The same without what must give (plan/relaxations.h, which re-plans with
+// it): the routes (plan/plan_route.h), ranking and one variant per arrangement.
+Plan planVariants(const Brief& brief, const PlanOptions& options = {}, const PlanMonitor* monitor = nullptr);
+
 // The sizing options every plan of the brief is sized with (area bands free).
 SizingOptions planSizingOptions(const Brief& brief, const PlanOptions& options = {});
 

@@ -107,11 +107,10 @@ struct Verifier {
         o.threads = 1;
         o.variants = 1;
         o.variantFlips = 0;
-        o.relaxations = false;
         o.timeLimit = std::min(left, 1.5);
         Brief b = changed;
         b.footprint = changedFp;
-        const Plan p = buildPlan(b, o);
+        const Plan p = planVariants(b, o);
         if (p.variants.empty() || p.status == PlanStatus::Internal || !p.variants.front().sized) return 0;
         return judge(unmetRequirements(b, changedFp, p.variants.front()), item, strict);
     }

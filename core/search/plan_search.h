@@ -20,14 +20,23 @@
 // moves; between rounds the best plans are turned into extended graphs with a
 // regular edge labeling (dual/tiling_dual.h, checked) and sized with the
 // area bands free (size/segment_sizing.h), so every plan returned is a
-// rectangular dual that passes the stage checkers. The search stops when a
-// plan meets the whole brief, when its move budget is spent, when the time
-// limit is reached or when the visitor says so. Rounds make it reproducible:
-// the same seed and thread count give the same plans (unless the time limit
-// cuts it short).
+// rectangular dual that passes the stage checkers. Plans are judged by the
+// one measure (search/requirements.h) and ranked by the one score
+// (search/score.h), one per arrangement (search/arrangement_key.h). The
+// search stops when a plan meets the whole brief, when its move budget is
+// spent, when the time limit is reached or when the visitor says so. Rounds
+// make it reproducible: the same seed and thread count give the same plans
+// (unless the time limit cuts it short).
 //
-// Running time: O(rooms + adjacencies) per move; the budget grows with the
-// room count (SearchOptions::moves).
+// The pieces live in search/detail: the problem (problem.h), the cost
+// (cost.h), the seeds (seeds.h), the moves (moves.h), the chain (chain.h)
+// and the sizing and pool of plans (sized_plans.h); this file orchestrates.
+//
+// Running time: per move O(depth) for the move, O(blocks) for the layout,
+// O(blocks · cut-outs + links) for the cost; per round, for each chain whose
+// best plan changed, one dual (O(blocks log blocks)) and one to three
+// sizings (Newton steps with a sparse factorisation each) and an O(rooms²)
+// arrangement key. The budget grows with the room count (SearchOptions::moves).
 #pragma once
 
 #include "augment/extended_graph.h"
@@ -60,8 +69,9 @@ struct SearchPlan {
     RegularEdgeLabeling labeling;
     SizingResult sized;         // rects per vertex of `extended`
     RequirementMisses misses;
-    double cost = 0;            // the search's own measure (lower is better)
-    std::string key;            // the arrangement: which rooms meet, and how
+    double score = 0;           // the one ranking (search/score.h; lower is better)
+    double cost = 0;            // the search's own measure (lower is better), for progress
+    std::string key;            // the arrangement (search/arrangement_key.h)
 };
 
 struct SearchProgress {
@@ -84,7 +94,7 @@ enum class SearchStatus { Usable, BestEffort, Stopped, Empty };
 
 struct SearchResult {
     SearchStatus status = SearchStatus::Empty;
-    std::vector<SearchPlan> plans; // best first: fewest misses, then cost
+    std::vector<SearchPlan> plans; // best first, by score
     double firstUsableSeconds = -1;
     double seconds = 0;
     long long moves = 0;

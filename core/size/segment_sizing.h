@@ -136,6 +136,7 @@ private:
     // coordinate[to] − coordinate[from] ≥ min on one axis; `vertex` is the
     // room or spare whose extent it is (−1 for a wall).
     struct Gap { bool vertical; int from, to; double min; int vertex = -1; };
+    struct Solve; // the steps of one sizing (segment_sizing.cpp)
     std::vector<Gap> gaps() const;
     void describe(SizingResult& result) const; // rects, room sizes, unmet from result.x, result.y
 

@@ -1,0 +1,105 @@
+// SPDX-License-Identifier: MIT
+#include "search/detail/chain.h"
+
+#include "search/detail/seeds.h"
+
+#include <cmath>
+
+namespace abut::detail {
+
+namespace {
+constexpr double finalTemperature = 0.01;
+constexpr double freshTemperature = 0.6;   // an epoch from a fresh seed
+constexpr double settledTemperature = 0.03; // an epoch from the best plan
+constexpr int seedBatch = 32;
+} // namespace
+
+Chain::Chain(const SearchProblem& p, const Brief& brief, unsigned seed, int index, long long epochMoves)
+    : p_(p), brief_(brief), rng_(seed), mover_(p, rng_), index_(index), epochMoves_(epochMoves) {
+    restart(true);
+}
+
+void Chain::run(long long count) {
+    for (long long i = 0; i < count; ++i) {
+        if (epochDone_ >= epochMoves_) restart(false);
+        const double t = double(epochDone_) / double(epochMoves_);
+        const double temperature = startTemperature_ * std::pow(finalTemperature / startTemperature_, t);
+        ++epochDone_;
+        ++moves_;
+        trial_ = cur_;
+        if (!mover_.propose(trial_, curRects_, curViolations_)) continue;
+        trial_.layout(p_.area, p_.outer, trialRects_, scratch_, &p_.pins);
+        const Evaluation e = evaluate(p_, trialRects_, &trialViolations_);
+        const double delta = e.cost - curEval_.cost;
+        if (delta <= 0 || unit_(rng_) < std::exp(-delta / temperature)) {
+            std::swap(cur_, trial_);
+            std::swap(curRects_, trialRects_);
+            std::swap(curViolations_, trialViolations_);
+            curEval_ = e;
+            if (better(e, bestEval_)) {
+                best_ = cur_;
+                bestEval_ = e;
+                bestRects_ = curRects_;
+                bestChanged_ = true;
+            }
+        }
+    }
+}
+
+bool Chain::takeBestChanged() {
+    const bool c = bestChanged_;
+    bestChanged_ = false;
+    return c;
+}
+
+void Chain::settle() {
+    settled_ = true;
+    epochDone_ = epochMoves_;
+}
+
+// The best of a batch: positions from the sketch with noise or from spring
+// layouts, cut through plainly or in circulation zones.
+FloorTree Chain::freshSeed() {
+    FloorTree out;
+    double bestCost = 1e300;
+    int bestHard = 1 << 30;
+    std::vector<Point> pos;
+    for (int k = 0; k < seedBatch; ++k) {
+        if (k % 8 == 0) pos = roughPositions(p_, brief_, (k / 8) % 2 == 0, 0.3 * unit_(rng_), rng_);
+        const std::vector<Zone> zones = circulationZones(p_, rng_);
+        const bool zoned = !zones.empty() && k % 2 == 1;
+        FloorTree seed = zoned ? zoneTree(p_, zones, pos, rng_, 1.0) : cutTree(p_, pos, rng_, 1.0);
+        seed.layout(p_.area, p_.outer, trialRects_, scratch_, &p_.pins);
+        const Evaluation e = evaluate(p_, trialRects_, nullptr);
+        if (e.hard < bestHard || (e.hard == bestHard && e.cost < bestCost)) {
+            bestHard = e.hard;
+            bestCost = e.cost;
+            out = std::move(seed);
+        }
+    }
+    return out;
+}
+
+void Chain::restart(bool first) {
+    epochDone_ = 0;
+    if (!first && settled_) { // the best plan, shaken once
+        cur_ = best_;
+        mover_.propose(cur_, curRects_, curViolations_);
+        startTemperature_ = settledTemperature;
+    } else {
+        // Chain 0 starts from the sketch as drawn.
+        if (first && index_ == 0) cur_ = cutTree(p_, roughPositions(p_, brief_, true, 0.0, rng_), rng_, 0.0);
+        else cur_ = freshSeed();
+        startTemperature_ = freshTemperature;
+    }
+    cur_.layout(p_.area, p_.outer, curRects_, scratch_, &p_.pins);
+    curEval_ = evaluate(p_, curRects_, &curViolations_);
+    if (first || better(curEval_, bestEval_)) {
+        best_ = cur_;
+        bestEval_ = curEval_;
+        bestRects_ = curRects_;
+        bestChanged_ = true;
+    }
+}
+
+} // namespace abut::detail
