@@ -11,11 +11,7 @@ namespace abut {
 
 namespace {
 
-std::string number(double v) {
-    std::ostringstream ss;
-    ss << v;
-    return ss.str();
-}
+std::string number(double v) { return formatNumber(v); }
 
 bool inside(const Placement& p, const Footprint& fp) {
     const double tol = 1e-9 * std::max(fp.width, fp.depth);
@@ -25,6 +21,12 @@ bool inside(const Placement& p, const Footprint& fp) {
 double placeTolerance(const Footprint& fp) { return 1e-6 * std::max(fp.width, fp.depth); }
 
 } // namespace
+
+std::string formatNumber(double v) {
+    std::ostringstream ss;
+    ss << v;
+    return ss.str();
+}
 
 std::string numberProblem(double v, const std::string& what, double atLeast, double atMost) {
     if (!std::isfinite(v)) return what + " must be a finite number";

@@ -12,6 +12,10 @@
 
 namespace abut {
 
+// A number as the rules and the diagnostics write it: the shortest form
+// (ostream's default, six significant digits), e.g. 0.001, 1e+08, 12.5.
+std::string formatNumber(double v);
+
 // A finite number in [atLeast, atMost]; a positive `atLeast` below 1 (a
 // plausible minimum such as 0.001) is said as "greater than 0" for values up
 // to 0, e.g. "area must be greater than 0, got -3", "maxAspect must be at

@@ -1,19 +1,13 @@
 // SPDX-License-Identifier: MIT
 #include "brief/footprint_check.h"
 
+#include "brief/brief_rules.h"
+
 #include <algorithm>
 #include <cmath>
 #include <sstream>
 
 namespace abut {
-
-namespace {
-std::string formatNumber(double v) {
-    std::ostringstream ss;
-    ss << v;
-    return ss.str();
-}
-} // namespace
 
 std::vector<Diagnostic> footprintProblems(const Brief& brief) {
     std::vector<Diagnostic> out;

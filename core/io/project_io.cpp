@@ -23,11 +23,6 @@ std::string FileError::toString() const {
 
 namespace {
 
-std::string formatNumber(double v) {
-    std::ostringstream ss;
-    ss << v;
-    return ss.str();
-}
 
 std::string describe(const OrderedJson& v) {
     std::string d = v.dump();

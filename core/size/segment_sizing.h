@@ -15,7 +15,7 @@
 // for rooms of very different sizes; spare spaces as small as the constraints let them be;
 // `maxAspect` as a soft wish). Each Newton system is sparse (every residual
 // touches four segments) and solved with Eigen's SimplicialLDLT; the sparsity
-// pattern is analysed once per problem. Why this and not a closed form: only
+// pattern is analysed once per solve() and refactorised at each step. Why this and not a closed form: only
 // one-sided layouts are area-universal (Eppstein, Mumford, Speckmann &
 // Verbeek, SIAM J. Comput. 41(3), 2012); for them the least-squares optimum
 // is exact, for the others it is the best compromise, and the same solver
