@@ -92,6 +92,7 @@ struct Room {
     std::optional<double> maxAspect;     // long side / short side, >= 1
     std::optional<double> areaTolerance; // fraction: the band around `area` that counts as on target
     std::string category;
+    std::string zone; // the planner's zone: rooms of one zone are planned as one block first ("": Abut forms zones)
     FacadeWish facade;
     std::optional<Placement> fixed; // stays exactly there in every variant (a stair and lift core)
     // Not a room: a cut-out of the footprint, planned as a block held in place

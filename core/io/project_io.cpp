@@ -160,6 +160,8 @@ void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& br
         }
     if (j.contains("category"))
         if (auto c = r.text(j, "category", ptr + "/category", "category")) room.category = *c;
+    if (j.contains("zone"))
+        if (auto z = r.text(j, "zone", ptr + "/zone", "zone")) room.zone = *z;
     if (j.contains("facade")) {
         const OrderedJson& f = j.at("facade");
         if (!f.is_array()) {
@@ -184,7 +186,7 @@ void readRoom(Reader& r, const OrderedJson& j, const std::string& ptr, Brief& br
             fixed = readPlacement(r, j.at("fixed"), ptr + "/fixed", "fixed");
     }
     room.unknownFields = unknownOf(
-        j, {"id", "name", "area", "minWidth", "maxAspect", "areaTolerance", "category", "facade", "fixed"});
+        j, {"id", "name", "area", "minWidth", "maxAspect", "areaTolerance", "category", "zone", "facade", "fixed"});
     brief.rooms.push_back(std::move(room));
     if (fixed) {
         brief.rooms.back().fixed = fixed;
@@ -510,6 +512,7 @@ std::string serializeProject(const Brief& brief) {
         if (room.maxAspect) j["maxAspect"] = *room.maxAspect;
         if (room.areaTolerance) j["areaTolerance"] = *room.areaTolerance;
         if (!room.category.empty()) j["category"] = room.category;
+        if (!room.zone.empty()) j["zone"] = room.zone;
         if (!room.facade.empty()) {
             OrderedJson f = OrderedJson::array();
             if (room.facade.anySide) f.push_back("any");

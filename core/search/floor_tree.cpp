@@ -50,6 +50,16 @@ int FloorTree::makeCut(bool vertical, int first, int second) {
     return c;
 }
 
+int FloorTree::makeWheelOver(const std::array<int, 5>& parts, bool mirrored) {
+    const int w = allocate(Kind::Wheel);
+    nodes_[w].flag = mirrored;
+    for (int k = 0; k < 5; ++k) {
+        nodes_[w].child[k] = parts[k];
+        nodes_[parts[k]].parent = w;
+    }
+    return w;
+}
+
 void FloorTree::setRoot(int i) {
     root_ = i;
     nodes_[i].parent = -1;

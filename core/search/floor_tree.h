@@ -57,6 +57,8 @@ public:
     // Building (seeds): leaves exist from the start; cuts are made over two
     // parentless nodes; the last node made parentless-free becomes the root.
     int makeCut(bool vertical, int first, int second);
+    // A pinwheel over five parentless nodes (arms NW, NE, SE, SW, then the centre).
+    int makeWheelOver(const std::array<int, 5>& parts, bool mirrored);
     void setRoot(int i);
     // Balanced cuts over the leaves of `blocks` (parentless), in order; their top node.
     int chain(const std::vector<int>& blocks, bool vertical);

@@ -7,6 +7,8 @@
 #include "search/detail/chain.h"
 #include "search/detail/problem.h"
 #include "search/detail/sized_plans.h"
+#include "search/detail/zone_plan.h"
+#include "search/zones.h"
 
 #include <algorithm>
 #include <chrono>
@@ -14,6 +16,8 @@
 #include <memory>
 #include <set>
 #include <thread>
+#include <cstdio>
+#include <cstdlib>
 
 namespace abut {
 
@@ -144,15 +148,23 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
     // enough for a sweep to settle.
     const long long round = std::clamp<long long>(400000 / std::max(1, B), 500, 20000);
     const long long epoch = std::max<long long>(20000LL, std::min<long long>(budget / 3, 800LL * B));
+    bool settled = false;
     std::vector<std::unique_ptr<detail::Chain>> chains;
     for (int c = 0; c < threads; ++c)
         chains.push_back(std::make_unique<detail::Chain>(
-            p, brief, options.seed * 1000003u + 7919u * static_cast<unsigned>(c), c, epoch));
+            p, options.seed * 1000003u + 7919u * static_cast<unsigned>(c), c, epoch));
     detail::ThreadPool pool(threads);
     detail::PlanPool found(static_cast<std::size_t>(std::max(1, options.keep)) * 2);
 
     auto consider = [&](const std::vector<Rect>& rects) {
         SizedTiling s = sizeTiling(brief, fp, rects, options);
+        if (!s.ok && std::getenv("ABUT_DEBUG_ZONES")) {
+            std::fprintf(stderr, "not a dual: %s\n", s.problem.c_str());
+            if (FILE* f = std::fopen("/tmp/notdual.txt", "w")) {
+                for (const Rect& r : rects) std::fprintf(f, "%.17g %.17g %.17g %.17g\n", r.x0, r.y0, r.x1, r.y1);
+                std::fclose(f);
+            }
+        }
         if (!s.ok) return;
         SearchPlan best = detail::pickSizing(brief, p, std::move(s.sizings));
         const bool wasUsable = found.usable();
@@ -165,7 +177,38 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
     };
 
     bool stopped = visitor && !visitor->onRound(SearchProgress{}); // asked before any work
-    bool settled = false;
+    // Large floors are planned top down by their zones first, one zone plan
+    // per chain (each with its own seed); the chains then polish them.
+    const ZoneTree zones = formZones(brief);
+    if (!stopped && p.rooms >= options.zonesFrom && zones.layered()) {
+        pool.run(threads, [&](int c) {
+            detail::ZonePlanner planner(p, zones, options.seed * 1000003u + 7919u * static_cast<unsigned>(c) + 17u);
+            planner.plan([&] { return options.timeLimit <= 0 || elapsed() < options.timeLimit; });
+            const FloorTree tree = planner.tree();
+            if (tree.valid()) chains[c]->startFrom(tree);
+        });
+        for (auto& c : chains) {
+            if (std::getenv("ABUT_DEBUG_ZONES"))
+                std::fprintf(stderr, "zones: %.2f s, hard %d cost %.3f\n", elapsed(), c->bestEvaluation().hard,
+                             c->bestEvaluation().cost);
+            if (std::getenv("ABUT_DEBUG_ZONES") && &c == &chains.front())
+                if (FILE* f = std::fopen("/tmp/zoneplan.json", "w")) {
+                    std::fprintf(f, "{\"variants\": [{\"rooms\": [");
+                    for (int i = 0; i < p.rooms; ++i) {
+                        const Rect& r = c->bestRects()[i];
+                        std::fprintf(f, "%s{\"id\": \"%s\", \"x\": %.9g, \"y\": %.9g, \"width\": %.9g, \"depth\": %.9g}",
+                                     i ? ", " : "", brief.rooms[i].id.c_str(), r.x0, r.y0, r.width(), r.depth());
+                    }
+                    std::fprintf(f, "], \"spaces\": []}]}\n");
+                    std::fclose(f);
+                }
+            if (c->takeBestChanged()) consider(c->bestRects());
+        }
+        if (std::getenv("ABUT_DEBUG_ZONES") && !found.plans().empty())
+            std::fprintf(stderr, "zones sized: %.2f s, misses %d score %.3f\n", elapsed(), found.plans().front().misses.count(),
+                         found.plans().front().score);
+        settled = true;
+    }
     long long roundsAfterUsable = 0;
     for (long long spent = 0; spent < budget && !stopped;) {
         const long long step = std::min(round, budget - spent);

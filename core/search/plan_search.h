@@ -61,6 +61,7 @@ struct SearchOptions {
     double grid = 0;            // m: planning module for walls (0 = none)
     bool stopWhenUsable = true; // stop at the first plan that meets the whole brief
     int variantFlips = -1;      // labeling flips of the best plan sized as variants (−1 = 3 × keep)
+    int zonesFrom = 40;         // rooms from which a floor is planned top down by its zones first (search/zones.h)
 };
 
 // One arrangement found, sized.

@@ -1,8 +1,9 @@
 # SPDX-License-Identifier: MIT
 """Acceptance of the plan search: briefs read off plausible building plans
 (plan_briefs.py, or with --shaped shaped_briefs.py: L, U and courtyard
-footprints and fixed cores; the drawn plan is the witness that an exact
-answer exists),
+footprints and fixed cores, or with --floors floor_briefs.py: professional
+floors of 40-250 rooms; the drawn plan is the witness that an exact answer
+exists),
 planned by `abut-cli plan`, the best variant judged with shapely
 (plan_quality.py): worst area deviation within 5 %, every minimum width,
 aspect limit, 'must' adjacency (doors with a door-wide wall) and facade wish.
@@ -27,6 +28,7 @@ import tempfile
 import time
 
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
+import floor_briefs  # noqa: E402
 import plan_briefs  # noqa: E402
 import plan_quality  # noqa: E402
 import shaped_briefs  # noqa: E402
@@ -42,6 +44,9 @@ ap.add_argument("--write-baseline")
 ap.add_argument("--keep")
 ap.add_argument("--jobs", type=int, default=2)
 ap.add_argument("--shaped", action="store_true", help="briefs on L, U and courtyard footprints and with fixed cores")
+ap.add_argument("--floors", action="store_true", help="professional floors of 40-250 rooms (floor_briefs.py)")
+ap.add_argument("--sizes", type=int, nargs="+", help="with --floors: a room count, or a range LO HI")
+ap.add_argument("--threads", type=int, default=1, help="threads per brief")
 ap.add_argument("--legacy", action="store_true", help="the CLI has no --time-limit/--threads (baseline runs)")
 args = ap.parse_args()
 
@@ -54,7 +59,7 @@ def run(job):
     json.dump({"kind": kind, "rooms": witness}, open(os.path.join(tmp, f"b{k}.witness.json"), "w"))
     cmd = [args.cli, "plan", path, "-o", out, "--variants", "3", "--seed", str(k + 1)]
     if not args.legacy:
-        cmd += ["--time-limit", str(args.time_limit), "--threads", "1"]
+        cmd += ["--time-limit", str(args.time_limit), "--threads", str(args.threads)]
     start = time.monotonic()
     r = subprocess.run(cmd, capture_output=True, text=True)
     seconds = time.monotonic() - start
@@ -70,7 +75,10 @@ def musts(miss):
     return sum(1 for m in miss if m.startswith("must "))
 
 
-briefs = (shaped_briefs if args.shaped else plan_briefs).generate(args.count, args.seed)
+if args.floors:
+    briefs = floor_briefs.generate(args.count, args.seed, tuple(args.sizes) if args.sizes else (40, 250))
+else:
+    briefs = (shaped_briefs if args.shaped else plan_briefs).generate(args.count, args.seed)
 results = []
 with tempfile.TemporaryDirectory() as scratch:
     tmp = args.keep or scratch

@@ -143,7 +143,7 @@ private slots:
         b.sketch = {{"w", {0, 50}}, {"e", {100, 50}}, {"n", {50, 100}}, {"s", {50, 0}}};
         const SearchProblem p = makeProblem(b, *b.footprint, SearchOptions{});
         std::mt19937 rng(1);
-        const std::vector<Point> pos = roughPositions(p, b, true, 0.0, rng);
+        const std::vector<Point> pos = roughPositions(p, true, 0.0, rng);
         QVERIFY(pos[0].x < pos[2].x && pos[2].x < pos[1].x); // west, middle, east (north up)
         QVERIFY(pos[3].y < pos[0].y && pos[0].y < pos[2].y);
         const std::vector<Rect> rects = layoutOf(p, cutTree(p, pos, rng, 0.0));
@@ -160,7 +160,7 @@ private slots:
         std::mt19937 rng(5);
         int held = 0;
         for (int k = 0; k < 20; ++k) {
-            const std::vector<Rect> rects = layoutOf(p, cutTree(p, roughPositions(p, b, false, 0.3, rng), rng, 1.0));
+            const std::vector<Rect> rects = layoutOf(p, cutTree(p, roughPositions(p, false, 0.3, rng), rng, 1.0));
             QVERIFY(tilingProblem(rects, 12, 8).isEmpty());
             held += std::abs(rects[0].x0 - 4) < 1e-9 && std::abs(rects[0].x1 - 6) < 1e-9; // the layout lays cuts on its sides
         }
@@ -175,7 +175,7 @@ private slots:
         QCOMPARE(zones.size(), std::size_t(1));
         QCOMPARE(zones[0].hub, 0);
         QCOMPARE(zones[0].clients.size(), std::size_t(8));
-        const std::vector<Rect> rects = layoutOf(p, zoneTree(p, zones, roughPositions(p, b, false, 0, rng), rng, 0));
+        const std::vector<Rect> rects = layoutOf(p, zoneTree(p, zones, roughPositions(p, false, 0, rng), rng, 0));
         QVERIFY(tilingProblem(rects, 24, 12).isEmpty());
         for (int k = 1; k <= 8; ++k) QVERIFY(sharedWallLength(rects[0], rects[k], 1e-9) >= 0.9);
     }
@@ -183,7 +183,7 @@ private slots:
     void aChainIsTheSameForTheSameSeed() {
         const Brief b = corridorBrief(6);
         const SearchProblem p = makeProblem(b, *b.footprint, SearchOptions{});
-        Chain one(p, b, 42, 1, 5000), two(p, b, 42, 1, 5000);
+        Chain one(p, 42, 1, 5000), two(p, 42, 1, 5000);
         one.run(20000);
         two.run(20000);
         QCOMPARE(one.bestEvaluation().cost, two.bestEvaluation().cost);

@@ -8,6 +8,7 @@
 #include "io/project_io.h"
 #include "plan/plan_builder.h"
 #include "search/plan_search.h"
+#include "search/zones.h"
 
 #include <nlohmann/json.hpp>
 
@@ -106,10 +107,28 @@ int fingerprint(int argc, char** argv) {
     return 0;
 }
 
+// abut_probe zones PROJECT: the zones Abut forms (search/zones.h), one line each.
+int zones(const char* path) {
+    const abut::LoadResult loaded = abut::loadProject(path);
+    if (!loaded.ok()) return 2;
+    const abut::Brief b = abut::plannedBrief(loaded.brief);
+    const abut::ZoneTree t = abut::formZones(b);
+    for (std::size_t k = 0; k < t.zones.size(); ++k) {
+        const abut::ZoneTree::Zone& z = t.zones[k];
+        std::cout << k << " parent " << z.parent << " hub " << (z.hub >= 0 ? b.rooms[z.hub].id : "-") << " area "
+                  << z.area << " zones " << z.zones.size() << " rooms";
+        for (int r : z.rooms) std::cout << " " << b.rooms[r].id;
+        std::cout << "\n";
+    }
+    std::cout << "layered " << t.layered() << "\n";
+    return 0;
+}
+
 int main(int argc, char** argv) {
     const std::string mode = argc > 1 ? argv[1] : "";
     if (mode == "search" && argc > 2) return search(argc, argv);
     if (mode == "fingerprint" && argc > 3) return fingerprint(argc, argv);
+    if (mode == "zones" && argc > 2) return zones(argv[2]);
     if (mode != "planar") {
         std::cerr << "usage: abut_probe planar < graphs.json\n";
         return 2;

@@ -14,8 +14,8 @@ constexpr double settledTemperature = 0.03; // an epoch from the best plan
 constexpr int seedBatch = 32;
 } // namespace
 
-Chain::Chain(const SearchProblem& p, const Brief& brief, unsigned seed, int index, long long epochMoves)
-    : p_(p), brief_(brief), rng_(seed), mover_(p, rng_), index_(index), epochMoves_(epochMoves) {
+Chain::Chain(const SearchProblem& p, unsigned seed, int index, long long epochMoves)
+    : p_(p), rng_(seed), mover_(p, rng_), index_(index), epochMoves_(epochMoves) {
     restart(true);
 }
 
@@ -57,6 +57,19 @@ void Chain::settle() {
     epochDone_ = epochMoves_;
 }
 
+void Chain::startFrom(const FloorTree& tree) {
+    cur_ = tree;
+    cur_.layout(p_.area, p_.outer, curRects_, scratch_, &p_.pins);
+    curEval_ = evaluate(p_, curRects_, &curViolations_);
+    best_ = cur_;
+    bestEval_ = curEval_;
+    bestRects_ = curRects_;
+    bestChanged_ = true;
+    settled_ = true;
+    epochDone_ = 0;
+    startTemperature_ = settledTemperature;
+}
+
 // The best of a batch: positions from the sketch with noise or from spring
 // layouts, cut through plainly or in circulation zones.
 FloorTree Chain::freshSeed() {
@@ -65,7 +78,7 @@ FloorTree Chain::freshSeed() {
     int bestHard = 1 << 30;
     std::vector<Point> pos;
     for (int k = 0; k < seedBatch; ++k) {
-        if (k % 8 == 0) pos = roughPositions(p_, brief_, (k / 8) % 2 == 0, 0.3 * unit_(rng_), rng_);
+        if (k % 8 == 0) pos = roughPositions(p_, (k / 8) % 2 == 0, 0.3 * unit_(rng_), rng_);
         const std::vector<Zone> zones = circulationZones(p_, rng_);
         const bool zoned = !zones.empty() && k % 2 == 1;
         FloorTree seed = zoned ? zoneTree(p_, zones, pos, rng_, 1.0) : cutTree(p_, pos, rng_, 1.0);
@@ -88,7 +101,7 @@ void Chain::restart(bool first) {
         startTemperature_ = settledTemperature;
     } else {
         // Chain 0 starts from the sketch as drawn.
-        if (first && index_ == 0) cur_ = cutTree(p_, roughPositions(p_, brief_, true, 0.0, rng_), rng_, 0.0);
+        if (first && index_ == 0) cur_ = cutTree(p_, roughPositions(p_, true, 0.0, rng_), rng_, 0.0);
         else cur_ = freshSeed();
         startTemperature_ = freshTemperature;
     }

@@ -9,7 +9,6 @@
 // O(blocks) to lay the tree out and O(blocks · cut-outs + links) to cost it.
 #pragma once
 
-#include "brief/brief.h"
 #include "search/detail/cost.h"
 #include "search/detail/moves.h"
 #include "search/detail/problem.h"
@@ -23,7 +22,7 @@ namespace abut::detail {
 class Chain {
 public:
     // `index` 0 starts from the sketch as drawn; the others from a batch.
-    Chain(const SearchProblem& p, const Brief& brief, unsigned seed, int index, long long epochMoves);
+    Chain(const SearchProblem& p, unsigned seed, int index, long long epochMoves);
 
     // `count` annealing moves.
     void run(long long count);
@@ -38,6 +37,9 @@ public:
     bool takeBestChanged();
     // From now on, epochs restart from the best plan at a low temperature.
     void settle();
+    // Continues from `tree` (a plan found elsewhere, a zone plan) as its best
+    // plan, settled: epochs from it at a low temperature.
+    void startFrom(const FloorTree& tree);
 
     // Fewer misses first, then the lower cost.
     static bool better(const Evaluation& a, const Evaluation& b) {
@@ -49,7 +51,6 @@ private:
     FloorTree freshSeed();
 
     const SearchProblem& p_;
-    const Brief& brief_;
     std::mt19937 rng_;
     std::uniform_real_distribution<double> unit_{0.0, 1.0};
     Moves mover_;

@@ -21,10 +21,11 @@ double sideDistance(const Rect& r, Side s, const Rect& outer) {
 } // namespace
 
 double exteriorDistance(const SearchProblem& p, const std::vector<Rect>& rect, const Rect& r, Side s) {
-    double d = sideDistance(r, s, p.outer);
+    double d = sideDistance(r, s, p.bounds);
     const double tol = p.lineTolerance();
-    for (int k : p.cutouts) {
-        const Rect& c = rect[k];
+    // Cut-outs that are blocks count where the layout has them (the search
+    // pulls them to their places), the others where they are.
+    auto beyond = [&](const Rect& c) {
         const bool acrossX = std::min(r.x1, c.x1) - std::max(r.x0, c.x0) > tol;
         const bool acrossY = std::min(r.y1, c.y1) - std::max(r.y0, c.y0) > tol;
         switch (s) {
@@ -33,7 +34,9 @@ double exteriorDistance(const SearchProblem& p, const std::vector<Rect>& rect, c
         case Side::E: if (acrossY && c.x0 >= r.x1 - tol) d = std::min(d, c.x0 - r.x1); break;
         case Side::W: if (acrossY && c.x1 <= r.x0 + tol) d = std::min(d, r.x0 - c.x1); break;
         }
-    }
+    };
+    for (int k : p.cutouts) beyond(rect[k]);
+    for (const Rect& c : p.cutoutRects) beyond(c);
     return d;
 }
 
@@ -120,7 +123,7 @@ void linkTerm(const SearchProblem& p, int li, const std::vector<Rect>& rect, Eva
     const SearchProblem::Link& l = p.links[li];
     const double L = p.scale;
     const Rect& a = rect[l.a];
-    const Rect& b = rect[l.b];
+    const Rect& b = p.rectOf(l.b, rect);
     const double len = sharedWallLength(a, b, p.lineTolerance());
     if (len >= l.aim * (1 - p.thresholds.slack)) return;
     if (len > 0) {

@@ -6,6 +6,17 @@
 
 namespace abut::detail {
 
+namespace {
+// The side of the outer rectangle that an outside rectangle lies beyond.
+Side sideFacing(const Rect& outer, const Rect& o, double tol) {
+    if (o.y0 >= outer.y1 - tol) return Side::N;
+    if (o.y1 <= outer.y0 + tol) return Side::S;
+    if (o.x0 >= outer.x1 - tol) return Side::E;
+    return Side::W;
+}
+
+} // namespace
+
 int Moves::ancestorOf(const FloorTree& t, int block, int up) const {
     int v = t.leafOf(block);
     for (int k = 0; k < up && t.node(v).parent >= 0; ++k) v = t.node(v).parent;
@@ -40,7 +51,37 @@ bool Moves::aimed(FloorTree& t, const Violation& v) {
     }
 }
 
+// A block that must reach a rectangle outside: towards the side it faces —
+// swapped with a block there, beside one, or as a strip along that side.
+bool Moves::atPort(FloorTree& t, int a, const Rect& port) {
+    const double tol = p_.lineTolerance();
+    const Side s = sideFacing(p_.outer, port, tol);
+    std::vector<int> there;
+    for (int i = 0; i < p_.blockCount(); ++i) {
+        if (i == a || p_.blocks[i].cutout) continue;
+        const Rect& r = (*rects_)[i];
+        const bool on = s == Side::N ? r.y1 >= p_.outer.y1 - tol
+                        : s == Side::S ? r.y0 <= p_.outer.y0 + tol
+                        : s == Side::E ? r.x1 >= p_.outer.x1 - tol
+                                       : r.x0 <= p_.outer.x0 + tol;
+        const bool facing = s == Side::N || s == Side::S ? std::min(r.x1, port.x1) - std::max(r.x0, port.x0) > tol
+                                                         : std::min(r.y1, port.y1) - std::max(r.y0, port.y0) > tol;
+        if (on && facing) there.push_back(i);
+    }
+    const double u = unit();
+    if (!there.empty() && u < 0.4) {
+        t.swapBlocks(a, there[randomInt(static_cast<int>(there.size()))]);
+        return true;
+    }
+    if (!there.empty() && u < 0.8) {
+        const int c = there[randomInt(static_cast<int>(there.size()))];
+        return t.moveSubtree(t.leafOf(a), t.leafOf(c), s == Side::N || s == Side::S, coin());
+    }
+    return t.moveSubtree(t.leafOf(a), t.root(), s == Side::E || s == Side::W, s == Side::W || s == Side::S);
+}
+
 bool Moves::atLink(FloorTree& t, const Violation& v) {
+    if (p_.isOutside(v.other)) return atPort(t, v.block, p_.rectOf(v.other, *rects_));
     int a = v.block, b = v.other;
     const int hub = p_.isHub(a) && (!p_.isHub(b) || p_.mustDegree[a] >= p_.mustDegree[b]) ? a
                     : p_.isHub(b)                                                         ? b
@@ -150,7 +191,7 @@ bool Moves::gather(FloorTree& t, const std::vector<Rect>& rects, int hub) {
     for (int li : p_.linksOf[hub]) {
         const SearchProblem::Link& l = p_.links[li];
         const int c = l.a == hub ? l.b : l.a;
-        if (!l.must || p_.isHub(c)) continue;
+        if (!l.must || p_.isOutside(c) || p_.isHub(c)) continue;
         if (!all && sharedWallLength(rects[c], h, p_.lineTolerance()) >= l.aim) continue;
         const Rect& r = rects[c];
         const double along = alongX ? r.x0 + r.x1 : r.y0 + r.y1;

@@ -36,6 +36,7 @@ private:
     bool atLink(FloorTree& t, const Violation& v);
     bool atFacade(FloorTree& t, const Violation& v);
     bool atShape(FloorTree& t, const Violation& v);
+    bool atPort(FloorTree& t, int block, const Rect& port);
     bool atRandom(FloorTree& t);
     int randomInt(int n) { return std::uniform_int_distribution<int>(0, n - 1)(rng_); }
     bool coin() { return randomInt(2) == 1; }

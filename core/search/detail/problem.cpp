@@ -2,6 +2,7 @@
 #include "search/detail/problem.h"
 
 #include "search/plan_search.h"
+#include "search/zones.h"
 
 #include <algorithm>
 #include <cctype>
@@ -10,13 +11,14 @@
 namespace abut::detail {
 
 bool SearchProblem::isHub(int i) const {
-    return i < rooms && (mustDegree[i] >= 3 || (blocks[i].circulation && mustDegree[i] >= 2));
+    return i < rooms && (mustDegree[i] >= 3 || (blocks[i].circulation && mustDegree[i] >= 2)); // isHubRoom's rule
 }
 
 SearchProblem makeProblem(const Brief& brief, const Footprint& fp, const SearchOptions& o) {
     SearchProblem p;
     p.fp = fp;
     p.outer = {0, 0, fp.width, fp.depth};
+    p.bounds = p.outer;
     p.scale = std::sqrt(fp.width * fp.depth);
     p.rooms = static_cast<int>(brief.rooms.size());
     p.thresholds.anyWall = o.anyWall;
@@ -27,9 +29,7 @@ SearchProblem makeProblem(const Brief& brief, const Footprint& fp, const SearchO
         b.area = areas.room[i];
         b.minWidth = r.minWidth.value_or(0.0);
         b.maxAspect = r.maxAspect.value_or(0.0);
-        std::string cat = r.category;
-        std::transform(cat.begin(), cat.end(), cat.begin(), [](unsigned char c) { return std::tolower(c); });
-        b.circulation = cat == "circulation";
+        b.circulation = isCirculation(r);
         b.facade = r.facade;
         b.cutout = r.cutout;
         b.tolerance = r.tolerance();
@@ -48,6 +48,10 @@ SearchProblem makeProblem(const Brief& brief, const Footprint& fp, const SearchO
         p.blocks.push_back(b);
     }
     for (const SearchProblem::Block& b : p.blocks) p.area.push_back(b.area);
+    p.sketch.resize(p.blocks.size());
+    for (std::size_t i = 0; i < brief.rooms.size(); ++i)
+        if (const SketchPoint* s = brief.sketchPosition(brief.rooms[i].id); s && !brief.rooms[i].cutout)
+            p.sketch[i] = Point{s->x, s->y};
     if (!p.pinned.empty())
         for (const SearchProblem::Block& b : p.blocks) p.pins.push_back(b.pin);
     p.linksOf.resize(p.blocks.size());
@@ -55,7 +59,7 @@ SearchProblem makeProblem(const Brief& brief, const Footprint& fp, const SearchO
     for (const Adjacency& a : brief.adjacencies) {
         const int u = brief.roomIndex(a.a), v = brief.roomIndex(a.b);
         if (u < 0 || v < 0 || u == v) continue;
-        if (a.priority == Priority::Must) ++p.mustDegree[u], ++p.mustDegree[v];
+        if (a.priority == Priority::Must && a.kind == AdjacencyKind::Door) ++p.mustDegree[u], ++p.mustDegree[v];
         SearchProblem::Link l;
         l.a = u;
         l.b = v;

@@ -44,18 +44,29 @@ struct SearchProblem {
     std::vector<Block> blocks;
     std::vector<Link> links;
     std::vector<std::vector<int>> linksOf; // per block: indices into links
-    std::vector<int> mustDegree;           // per block: 'must' links
+    std::vector<int> mustDegree;           // per block: 'must' doors (what makes a hub)
     std::vector<double> area;              // per block
     std::vector<int> pinned, cutouts;      // blocks fixed in place; those of them that are cut-outs
+    std::vector<Rect> cutoutRects;         // cut-outs that are not blocks of this problem (a zone's): walls on them are facades
     std::vector<std::optional<Rect>> pins; // per block when any is pinned (FloorTree::layout), else empty
+    std::vector<std::optional<Point>> sketch; // per block: where the sketch has it (sketch units), when it has
     Footprint fp;
-    Rect outer;       // the rectangle the blocks tile: [0,W]×[0,D]
+    Rect bounds;      // the footprint's rectangle [0,W]×[0,D]: facades are its sides (and cut-outs')
+    Rect outer;       // the rectangle the blocks tile: the footprint's, or a zone's inside it
+    // Rectangles of blocks outside `outer` that links may reach (a zone's
+    // neighbours): a link's end b ≥ blockCount() is outside[b − blockCount()].
+    std::vector<Rect> outside;
     double scale = 1; // √(footprint area)
     int rooms = 0;    // blocks 0..rooms−1 are the brief's rooms (cut-outs included)
     Thresholds thresholds;
 
     int blockCount() const { return static_cast<int>(blocks.size()); }
-    // A hub: a room other rooms open on — three or more 'must' links, or a
+    bool isOutside(int b) const { return b >= blockCount(); }
+    // The rectangle of end `b` of a link: a block's in `rect`, or an outside one.
+    const Rect& rectOf(int b, const std::vector<Rect>& rect) const {
+        return isOutside(b) ? outside[b - blockCount()] : rect[b];
+    }
+    // A hub: a room other rooms open on — three or more 'must' doors, or a
     // circulation space with two. Zones form round hubs (search/detail/seeds.h),
     // the moves gather a hub's rooms along it. One meaning everywhere.
     bool isHub(int i) const;

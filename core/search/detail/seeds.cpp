@@ -7,7 +7,7 @@
 
 namespace abut::detail {
 
-std::vector<Point> roughPositions(const SearchProblem& p, const Brief& brief, bool useSketch, double jitter,
+std::vector<Point> roughPositions(const SearchProblem& p, bool useSketch, double jitter,
                                   std::mt19937& rng) {
     const int B = static_cast<int>(p.blocks.size());
     // Worked out in the outer rectangle's own frame, shifted into place at the end.
@@ -15,9 +15,9 @@ std::vector<Point> roughPositions(const SearchProblem& p, const Brief& brief, bo
     std::vector<Point> pos(B);
     std::uniform_real_distribution<double> unit(0.0, 1.0);
     std::normal_distribution<double> gauss(0.0, 1.0);
-    bool sketched = useSketch && p.rooms > 0;
-    for (int i = 0; i < p.rooms && sketched; ++i)
-        sketched = brief.rooms[i].cutout || brief.sketchPosition(brief.rooms[i].id) != nullptr;
+    // Sketched when every block that is not held in place has a position.
+    bool sketched = useSketch && p.rooms > 0 && p.sketch.size() == p.blocks.size();
+    for (int i = 0; i < p.rooms && sketched; ++i) sketched = p.blocks[i].pin || p.sketch[i].has_value();
     // Blocks fixed in place sit at their centres throughout.
     auto holdPins = [&]() {
         for (int i : p.pinned) pos[i] = {0.5 * (p.blocks[i].pin->x0 + p.blocks[i].pin->x1) - X,
@@ -26,15 +26,15 @@ std::vector<Point> roughPositions(const SearchProblem& p, const Brief& brief, bo
     if (sketched) {
         double x0 = 1e300, x1 = -1e300, y0 = 1e300, y1 = -1e300;
         for (int i = 0; i < p.rooms; ++i) {
-            if (brief.rooms[i].cutout) continue;
-            const SketchPoint* s = brief.sketchPosition(brief.rooms[i].id);
-            x0 = std::min(x0, s->x), x1 = std::max(x1, s->x), y0 = std::min(y0, s->y), y1 = std::max(y1, s->y);
+            if (!p.sketch[i]) continue;
+            const Point& s = *p.sketch[i];
+            x0 = std::min(x0, s.x), x1 = std::max(x1, s.x), y0 = std::min(y0, s.y), y1 = std::max(y1, s.y);
         }
         for (int i = 0; i < p.rooms; ++i) {
-            if (brief.rooms[i].cutout) continue;
-            const SketchPoint* s = brief.sketchPosition(brief.rooms[i].id);
-            pos[i].x = x1 > x0 ? W * (0.1 + 0.8 * (s->x - x0) / (x1 - x0)) : 0.5 * W;
-            pos[i].y = y1 > y0 ? D * (0.1 + 0.8 * (s->y - y0) / (y1 - y0)) : 0.5 * D;
+            if (!p.sketch[i]) continue;
+            const Point& s = *p.sketch[i];
+            pos[i].x = x1 > x0 ? W * (0.1 + 0.8 * (s.x - x0) / (x1 - x0)) : 0.5 * W;
+            pos[i].y = y1 > y0 ? D * (0.1 + 0.8 * (s.y - y0) / (y1 - y0)) : 0.5 * D;
         }
         for (int i = p.rooms; i < B; ++i) pos[i] = {unit(rng) * W, unit(rng) * D};
     } else {
@@ -47,6 +47,13 @@ std::vector<Point> roughPositions(const SearchProblem& p, const Brief& brief, bo
             const double cool = 1.0 - double(it) / steps;
             std::vector<Point> f(B);
             for (const SearchProblem::Link& l : p.links) {
+                if (p.isOutside(l.b)) { // towards the outside rectangle it must reach, kept inside
+                    const Rect& o = p.outside[l.b - B];
+                    const double tx = std::clamp(0.5 * (o.x0 + o.x1) - X, 0.0, W), ty = std::clamp(0.5 * (o.y0 + o.y1) - Y, 0.0, D);
+                    f[l.a].x += 0.5 * l.weight * (tx - pos[l.a].x);
+                    f[l.a].y += 0.5 * l.weight * (ty - pos[l.a].y);
+                    continue;
+                }
                 const double dx = pos[l.b].x - pos[l.a].x, dy = pos[l.b].y - pos[l.a].y;
                 const double dist = std::max(1e-9, std::hypot(dx, dy));
                 const double k = l.weight * 0.25 * (dist - (radius[l.a] + radius[l.b])) / dist;
@@ -194,7 +201,7 @@ std::vector<Point> reaches(const SearchProblem& p, const std::vector<Point>& pos
         for (int li : p.linksOf[i]) {
             const SearchProblem::Link& l = p.links[li];
             const int o = l.a == i ? l.b : l.a;
-            if (!l.must || p.isHub(o)) continue;
+            if (!l.must || p.isOutside(o) || p.isHub(o)) continue;
             x0 = std::min(x0, pos[o].x), x1 = std::max(x1, pos[o].x);
             y0 = std::min(y0, pos[o].y), y1 = std::max(y1, pos[o].y);
             ++rooms;
@@ -236,6 +243,7 @@ std::vector<Zone> circulationZones(const SearchProblem& p, std::mt19937& rng) {
                 const SearchProblem::Link& l = p.links[li];
                 if (!l.must) continue;
                 const int other = l.a == i ? l.b : l.a;
+                if (p.isOutside(other)) continue;
                 if (pass == 0 ? p.isHub(other) : zoneOf[other] >= 0 && !p.isHub(other)) {
                     options.push_back(zoneOf[other]);
                     via.push_back(other);

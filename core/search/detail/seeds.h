@@ -20,10 +20,10 @@
 
 namespace abut::detail {
 
-// The sketch's positions when `useSketch` and every room has one, else a
-// spring layout; `jitter` (0..1, × √area) moves them at random. Blocks held
-// in place sit at their centres.
-std::vector<Point> roughPositions(const SearchProblem& p, const Brief& brief, bool useSketch, double jitter,
+// The sketch's positions (SearchProblem::sketch) when `useSketch` and every
+// block has one, else a spring layout; `jitter` (0..1, × √area) moves them at
+// random. Blocks held in place sit at their centres.
+std::vector<Point> roughPositions(const SearchProblem& p, bool useSketch, double jitter,
                                   std::mt19937& rng);
 
 // Recursive area-proportional cuts of `outer` through the items' positions.
