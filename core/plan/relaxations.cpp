@@ -267,7 +267,9 @@ std::vector<Relaxation> overFull(const Context& c, const std::vector<UnmetItem>&
 
 // The room's own numbers: its target set to what it gets, its minimum width
 // or aspect limit eased to what it is. (With `surplus: spread` a target is
-// not what the room gets: no such suggestion.)
+// not what the room gets: no such suggestion.) An eased width or aspect may
+// need another arrangement (this one was bent round the old number): when
+// re-sizing it does not meet the brief, a short re-plan is tried.
 void ownNumbers(const Context& c, const UnmetItem& item, int i, Offers& o) {
     if (item.kind == RequirementKind::Area && c.given.surplus != Surplus::Spread) {
         Brief b = c.brief;
@@ -277,12 +279,13 @@ void ownNumbers(const Context& c, const UnmetItem& item, int i, Offers& o) {
     if (item.kind == RequirementKind::MinWidth) {
         Brief b = c.brief;
         b.rooms[i].minWidth = std::floor(item.achieved * 20) / 20;
-        if (*b.rooms[i].minWidth > 0) o.offer(c.check.meets(b, c.fp, item), minWidthRelaxation(c, i, *b.rooms[i].minWidth));
+        if (*b.rooms[i].minWidth > 0)
+            o.offer(c.check.meets(b, c.fp, item, true, true), minWidthRelaxation(c, i, *b.rooms[i].minWidth));
     }
     if (item.kind == RequirementKind::MaxAspect) {
         Brief b = c.brief;
         b.rooms[i].maxAspect = std::ceil(item.achieved * 10) / 10;
-        o.offer(c.check.meets(b, c.fp, item), aspectRelaxation(c, i, *b.rooms[i].maxAspect));
+        o.offer(c.check.meets(b, c.fp, item, true, true), aspectRelaxation(c, i, *b.rooms[i].maxAspect));
     }
 }
 
