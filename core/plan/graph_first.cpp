@@ -201,13 +201,39 @@ RegularEdgeLabeling GraphFirst::anneal(const PlanVariant& v, const RegularEdgeLa
     const ExtendedGraph& x = v.extended;
     SizingOptions quick = sizing_;
     quick.maxNewtonSteps = std::min(sizing_.maxNewtonSteps, 20);
-    auto quickEnergy = [&](const RegularEdgeLabeling& l) {
+    std::uniform_real_distribution<double> unit01(0.0, 1.0);
+    // Half the flips are drawn among the cycles through one of the three rooms
+    // furthest off their targets in the current labeling (moves aimed at a
+    // miss); the others among all cycles.
+    std::vector<std::vector<int>> cyclesAt(x.graph.vertexCount());
+    for (std::size_t ci = 0; ci < cycles.size(); ++ci)
+        for (int w : cycles[ci].vertices)
+            if (w >= 0 && w < static_cast<int>(cyclesAt.size())) cyclesAt[w].push_back(static_cast<int>(ci));
+    std::vector<int> worst; // the rooms furthest off in the labeling last accepted
+    auto quickEnergy = [&](const RegularEdgeLabeling& l, std::vector<int>* off = nullptr) {
         const SizingResult r = SizingProblem(brief_, x, l, plan_.footprint, quick).solve();
+        if (off) {
+            off->clear();
+            std::vector<std::pair<double, int>> by;
+            for (std::size_t i = 0; i < r.rooms.size(); ++i) by.emplace_back(-std::abs(r.rooms[i].deviation), static_cast<int>(i));
+            std::partial_sort(by.begin(), by.begin() + std::min<std::ptrdiff_t>(3, by.size()), by.end());
+            for (std::size_t k = 0; k < by.size() && k < 3; ++k) off->push_back(by[k].second);
+        }
         return r.objective + 100.0 * (1.0 - r.relaxation); // hard minimums that had to shrink weigh most
+    };
+    auto drawCycle = [&]() -> const FourCycle& {
+        if (!worst.empty() && unit01(rng_) < 0.5) {
+            const int room = worst[std::uniform_int_distribution<std::size_t>(0, worst.size() - 1)(rng_)];
+            if (room < static_cast<int>(cyclesAt.size()) && !cyclesAt[room].empty()) {
+                const std::vector<int>& at = cyclesAt[room];
+                return cycles[at[std::uniform_int_distribution<std::size_t>(0, at.size() - 1)(rng_)]];
+            }
+        }
+        return cycles[std::uniform_int_distribution<std::size_t>(0, cycles.size() - 1)(rng_)];
     };
     constexpr int annealRuns = 4;
     constexpr double metEnergy = 1e-8; // areas within about 0.01 %, nothing relaxed
-    const double startEnergy = quickEnergy(start);
+    const double startEnergy = quickEnergy(start, &worst);
     const double startTemperature = 0.3 * std::max(startEnergy, 1e-3);
     const int runBudget = std::max(1, budget / annealRuns);
     RegularEdgeLabeling bestRel = start;
@@ -227,7 +253,7 @@ RegularEdgeLabeling GraphFirst::anneal(const PlanVariant& v, const RegularEdgeLa
                 const FourCycle& c = cycles[pickCycle(rng_)];
                 if (const std::optional<Turn> sense = flipSense(x, cur, c)) flip(x, cur, c, *sense);
             }
-            energy = quickEnergy(cur);
+            energy = quickEnergy(cur, &worst);
             runBest = cur;
             ++evaluations;
         }
@@ -236,18 +262,20 @@ RegularEdgeLabeling GraphFirst::anneal(const PlanVariant& v, const RegularEdgeLa
         for (long attempts = 0; runEvaluations < runBudget && runBestEnergy > metEnergy && attempts < 50L * runBudget &&
                                 onTime();
              ++attempts) {
-            const FourCycle& c = cycles[pickCycle(rng_)];
+            const FourCycle& c = drawCycle();
             const std::optional<Turn> sense = flipSense(x, cur, c);
             if (!sense) continue;
             RegularEdgeLabeling trial = cur;
             flip(x, trial, c, *sense);
-            const double e = quickEnergy(trial);
+            std::vector<int> trialWorst;
+            const double e = quickEnergy(trial, &trialWorst);
             const double temperature = startTemperature * std::pow(1e-4, double(runEvaluations) / runBudget);
             ++runEvaluations;
             ++evaluations;
             if (e < energy || unit(rng_) < std::exp(-(e - energy) / temperature)) {
                 cur = std::move(trial);
                 energy = e;
+                worst = std::move(trialWorst);
                 if (energy < runBestEnergy) {
                     runBestEnergy = energy;
                     runBest = cur;
