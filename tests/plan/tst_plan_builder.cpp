@@ -96,10 +96,8 @@ private slots:
         const Plan plan = buildPlan(b);
         QVERIFY(!plan.variants.empty());
         const PlanVariant& v = plan.variants[0];
-        SizingOptions o;
-        o.doorWidth = b.doorWidth;
-        o.anyWall = PlanOptions{}.anyWall;
-        const SizingProblem problem(b, v.extended, v.labeling, plan.footprint, o);
+        // The options the plan was sized with (its minimum widths, door walls and contacts).
+        const SizingProblem problem(b, v.extended, v.labeling, plan.footprint, planSizingOptions(b));
         const SizingResult state = problem.stateOf(vertexRects(v));
         for (std::size_t i = 0; i < b.rooms.size(); ++i) QCOMPARE(state.rooms[i].area, v.rooms[i].area());
         const SegmentStructure& s = problem.segments();

@@ -124,12 +124,14 @@ private slots:
         int withPlan = 0, withoutPlan = 0, variantsChecked = 0;
         double slowest = 0;
         int slowestRooms = 0;
+        const bool trace = qEnvironmentVariableIsSet("ABUT_PROPERTY_TRACE"); // each brief as it starts
         for (int k = 0; k < count; ++k) {
             const Brief b = propertyBrief(rng, mix);
             const auto t0 = std::chrono::steady_clock::now();
             // What must give is worked out for one brief in 50 (it re-sizes the
             // plan a few times): enough to run it on every kind of brief.
             light.relaxations = k % 50 == 0;
+            if (trace) qInfo("brief %d: %d rooms", k, int(b.rooms.size()));
             const Plan plan = buildPlan(b, light);
             const double took = std::chrono::duration<double>(std::chrono::steady_clock::now() - t0).count();
             if (took > slowest) {
