@@ -7,6 +7,7 @@
 #include "search/detail/chain.h"
 #include "search/detail/problem.h"
 #include "search/detail/sized_plans.h"
+#include "search/detail/repair.h"
 #include "search/detail/zone_plan.h"
 #include "search/zones.h"
 
@@ -149,8 +150,18 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
     const long long round = std::clamp<long long>(400000 / std::max(1, B), 500, 20000);
     const long long epoch = std::max<long long>(20000LL, std::min<long long>(budget / 3, 800LL * B));
     bool settled = false;
+    // Large floors are planned top down by their zones first (search/zones.h),
+    // one zone plan per chain, each with its own seed; the chains then polish
+    // them. Up to twice `zonesFrom` rooms, half the chains (at least one, so
+    // at least two chains) start as usual instead: on a floor of 40–80 rooms
+    // either may win (an office floor of 44 rooms is planned better without).
+    const ZoneTree zones = formZones(brief);
+    const bool zoned = p.rooms >= options.zonesFrom && zones.layered();
+    const bool mixed = zoned && p.rooms < 2 * options.zonesFrom;
+    const int chainCount = mixed ? std::max(threads, 2) : threads;
+    auto fromZones = [&](int c) { return zoned && (!mixed || c % 2 == 0); };
     std::vector<std::unique_ptr<detail::Chain>> chains;
-    for (int c = 0; c < threads; ++c)
+    for (int c = 0; c < chainCount; ++c)
         chains.push_back(std::make_unique<detail::Chain>(
             p, options.seed * 1000003u + 7919u * static_cast<unsigned>(c), c, epoch));
     detail::ThreadPool pool(threads);
@@ -158,13 +169,6 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
 
     auto consider = [&](const std::vector<Rect>& rects) {
         SizedTiling s = sizeTiling(brief, fp, rects, options);
-        if (!s.ok && std::getenv("ABUT_DEBUG_ZONES")) {
-            std::fprintf(stderr, "not a dual: %s\n", s.problem.c_str());
-            if (FILE* f = std::fopen("/tmp/notdual.txt", "w")) {
-                for (const Rect& r : rects) std::fprintf(f, "%.17g %.17g %.17g %.17g\n", r.x0, r.y0, r.x1, r.y1);
-                std::fclose(f);
-            }
-        }
         if (!s.ok) return;
         SearchPlan best = detail::pickSizing(brief, p, std::move(s.sizings));
         const bool wasUsable = found.usable();
@@ -177,49 +181,40 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
     };
 
     bool stopped = visitor && !visitor->onRound(SearchProgress{}); // asked before any work
-    // Large floors are planned top down by their zones first, one zone plan
-    // per chain (each with its own seed); the chains then polish them.
-    const ZoneTree zones = formZones(brief);
-    if (!stopped && p.rooms >= options.zonesFrom && zones.layered()) {
-        pool.run(threads, [&](int c) {
+    std::vector<long long> used(chains.size(), 0); // per chain: moves spent on its zone plan (they count against the budget)
+    if (!stopped && zoned) {
+        pool.run(chainCount, [&](int c) {
+            if (!fromZones(c)) return;
             detail::ZonePlanner planner(p, zones, options.seed * 1000003u + 7919u * static_cast<unsigned>(c) + 17u);
-            planner.plan([&] { return options.timeLimit <= 0 || elapsed() < options.timeLimit; });
-            const FloorTree tree = planner.tree();
-            if (tree.valid()) chains[c]->startFrom(tree);
+            planner.plan([&] { return options.timeLimit <= 0 || elapsed() < options.timeLimit; }, std::max(1LL, budget / 2));
+            FloorTree tree = planner.tree();
+            used[c] = planner.movesUsed();
+            if (!tree.valid()) return;
+            // What the zones left unmet, part by part.
+            std::mt19937 rng(options.seed * 7919u + static_cast<unsigned>(c));
+            detail::RepairOptions repair;
+            repair.moves = std::max(1LL, budget / 2);
+            used[c] += detail::repairTree(p, tree, rng,
+                                          [&] { return options.timeLimit <= 0 || elapsed() < 0.5 * options.timeLimit; },
+                                          repair)
+                           .moves;
+            chains[c]->startFrom(tree);
         });
-        for (auto& c : chains) {
-            if (std::getenv("ABUT_DEBUG_ZONES"))
-                std::fprintf(stderr, "zones: %.2f s, hard %d cost %.3f\n", elapsed(), c->bestEvaluation().hard,
-                             c->bestEvaluation().cost);
-            if (std::getenv("ABUT_DEBUG_ZONES") && &c == &chains.front())
-                if (FILE* f = std::fopen("/tmp/zoneplan.json", "w")) {
-                    std::fprintf(f, "{\"variants\": [{\"rooms\": [");
-                    for (int i = 0; i < p.rooms; ++i) {
-                        const Rect& r = c->bestRects()[i];
-                        std::fprintf(f, "%s{\"id\": \"%s\", \"x\": %.9g, \"y\": %.9g, \"width\": %.9g, \"depth\": %.9g}",
-                                     i ? ", " : "", brief.rooms[i].id.c_str(), r.x0, r.y0, r.width(), r.depth());
-                    }
-                    std::fprintf(f, "], \"spaces\": []}]}\n");
-                    std::fclose(f);
-                }
+        for (auto& c : chains)
             if (c->takeBestChanged()) consider(c->bestRects());
-        }
-        if (std::getenv("ABUT_DEBUG_ZONES") && !found.plans().empty())
-            std::fprintf(stderr, "zones sized: %.2f s, misses %d score %.3f\n", elapsed(), found.plans().front().misses.count(),
-                         found.plans().front().score);
         settled = true;
     }
     long long roundsAfterUsable = 0;
     for (long long spent = 0; spent < budget && !stopped;) {
         const long long step = std::min(round, budget - spent);
-        pool.run(threads, [&](int c) { chains[c]->run(step); });
+        pool.run(chainCount, [&](int c) { chains[c]->run(std::clamp(budget - used[c] - spent, 0LL, step)); });
         spent += step;
         for (auto& c : chains) {
             if (c->takeBestChanged()) consider(c->bestRects());
             // Once settled, good neighbours of the best plan become variants.
             if (settled && c->currentEvaluation().hard == 0) consider(c->currentRects());
         }
-        result.moves = spent * threads;
+        result.moves = spent * chainCount;
         SearchProgress progress;
         progress.moves = result.moves;
         progress.done = double(spent) / double(budget);

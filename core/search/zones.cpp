@@ -2,6 +2,8 @@
 #include "search/zones.h"
 
 #include <algorithm>
+#include <cstdio>
+#include <cstdlib>
 #include <cctype>
 #include <deque>
 #include <map>
@@ -251,9 +253,10 @@ private:
     }
 
     // A hub that opens on few other hubs goes inside the zone of the one
-    // that opens on the most, when that one opens on clearly more (a flat's
-    // hall or a suite's entry on a corridor that meets others), or — two hubs
-    // alone — when its zone is much smaller (a hall on a lone corridor).
+    // that opens on the most, when that one opens on clearly more and would
+    // hold at least twice as much (a flat's hall or a suite's entry on a
+    // corridor that meets others, not a corridor piece on a cross corridor),
+    // or — two hubs alone — when its zone is much smaller (a hall on a lone corridor).
     // One level: only into a zone at the top.
     void nestSmallHubs() {
         const int n = static_cast<int>(brief_.rooms.size());
@@ -270,7 +273,14 @@ private:
             for (int v : g_.must[h])
                 if (hub_[v] && (o < 0 || hubDegree[v] > hubDegree[o] || (hubDegree[v] == hubDegree[o] && area[v] > area[o])))
                     o = v;
-            const bool branch = hubDegree[o] >= hubDegree[h] + 2;
+            // What each would hold with the hubs that hang off it alone.
+            auto potential = [&](int k) {
+                double a = area[k];
+                for (int v : g_.must[k])
+                    if (hub_[v] && v != h && hubDegree[v] == 1) a += area[v];
+                return a;
+            };
+            const bool branch = hubDegree[o] >= hubDegree[h] + 2 && potential(h) <= 0.5 * potential(o);
             const bool smaller = hubDegree[h] == 1 && hubDegree[o] == 1 && area[h] <= 0.35 * area[o];
             if (branch || smaller) tree_.zones[hubZone_[h]].parent = hubZone_[o];
         }
@@ -295,9 +305,59 @@ private:
     // out as one line (search/detail/zone_plan.h) rather than piece by piece.
     void mergeRuns() {
         const int n = static_cast<int>(brief_.rooms.size());
+        std::vector<char> cut(n, 0); // hubs a ring of corridors is broken at
         auto top = [&](int h) {
-            return hub_[h] && isCirculation(brief_.rooms[h]) && tree_.zones[hubZone_[h]].parent == 0;
+            return hub_[h] && !cut[h] && isCirculation(brief_.rooms[h]) && tree_.zones[hubZone_[h]].parent == 0;
         };
+        // A hub that meets two others that meet each other (a hall or stair on
+        // the joint of two pieces) hangs off them: into the zone of the one
+        // holding more.
+        std::vector<double> held(tree_.zones.size(), 0);
+        for (int i = 0; i < n; ++i) held[topOf(tree_.zoneOf[i])] += brief_.rooms[i].area;
+        for (bool again = true; again;) {
+            again = false;
+            for (int h = 0; h < n; ++h) {
+                if (!top(h)) continue;
+                std::vector<int> next;
+                for (int u : g_.must[h])
+                    if (top(u)) next.push_back(u);
+                if (next.size() != 2) continue;
+                const auto& a = g_.must[next[0]];
+                if (std::find(a.begin(), a.end(), next[1]) == a.end()) continue;
+                const int into = held[hubZone_[next[0]]] >= held[hubZone_[next[1]]] ? next[0] : next[1];
+                tree_.zones[hubZone_[h]].parent = hubZone_[into];
+                held[hubZone_[into]] += held[hubZone_[h]];
+                again = true;
+            }
+        }
+        // A ring of pieces (two runs joined by cross corridors, a ward's ring):
+        // a component of the top circulation hubs in which each meets two
+        // others; broken at its two smallest zones (the cross corridors) into runs.
+        std::vector<char> visited(n, 0);
+        for (int h = 0; h < n; ++h) {
+            if (!top(h) || visited[h]) continue;
+            std::vector<int> part{h}, stack{h};
+            visited[h] = 1;
+            bool twoEach = true;
+            while (!stack.empty()) {
+                const int v = stack.back();
+                stack.pop_back();
+                int degree = 0;
+                for (int u : g_.must[v]) {
+                    if (!top(u)) continue;
+                    ++degree;
+                    if (!visited[u]) {
+                        visited[u] = 1;
+                        part.push_back(u);
+                        stack.push_back(u);
+                    }
+                }
+                twoEach = twoEach && degree == 2;
+            }
+            if (!twoEach || part.size() < 4) continue;
+            std::sort(part.begin(), part.end(), [&](int a, int b) { return held[hubZone_[a]] < held[hubZone_[b]]; });
+            cut[part[0]] = cut[part[1]] = 1;
+        }
         std::vector<char> seen(n, 0);
         for (int h = 0; h < n; ++h) {
             if (!top(h) || seen[h]) continue;

@@ -12,14 +12,58 @@ constexpr double finalTemperature = 0.01;
 constexpr double freshTemperature = 0.6;   // an epoch from a fresh seed
 constexpr double settledTemperature = 0.03; // an epoch from the best plan
 constexpr int seedBatch = 32;
+constexpr int incrementalFrom = 40; // blocks from which a move is costed by what it moved only
 } // namespace
 
 Chain::Chain(const SearchProblem& p, unsigned seed, int index, long long epochMoves)
-    : p_(p), rng_(seed), mover_(p, rng_), index_(index), epochMoves_(epochMoves) {
+    : p_(p), rng_(seed), mover_(p, rng_), index_(index), epochMoves_(epochMoves),
+      incremental_(p.blockCount() >= incrementalFrom && p.cutouts.empty()) {
     restart(true);
 }
 
+// The same annealing with the cost kept term by term (large problems): a
+// move is measured by the blocks it moved and their links.
+void Chain::runIncremental(long long count) {
+    for (long long i = 0; i < count; ++i) {
+        if (epochDone_ >= epochMoves_) restart(false);
+        const double t = double(epochDone_) / double(epochMoves_);
+        const double temperature = startTemperature_ * std::pow(finalTemperature / startTemperature_, t);
+        ++epochDone_;
+        ++moves_;
+        trial_ = cur_;
+        if (!mover_.propose(trial_, curRects_, cache_.violations())) continue;
+        trial_.layout(p_.area, p_.outer, trialRects_, scratch_, &p_.pins);
+        changed_.clear();
+        for (int b = 0; b < p_.blockCount(); ++b) {
+            const Rect &x = trialRects_[b], &y = curRects_[b];
+            if (x.x0 != y.x0 || x.y0 != y.y0 || x.x1 != y.x1 || x.y1 != y.y1) changed_.push_back(b);
+        }
+        const Evaluation e = cache_.trial(p_, trialRects_, changed_);
+        const double delta = e.cost - curEval_.cost;
+        if (delta <= 0 || unit_(rng_) < std::exp(-delta / temperature)) {
+            std::swap(cur_, trial_);
+            std::swap(curRects_, trialRects_);
+            cache_.commit();
+            curEval_ = e;
+            if (++accepted_ % 4096 == 0) { // sums drift: measure afresh now and then
+                cache_.reset(p_, curRects_);
+                curEval_ = cache_.total();
+            }
+            if (better(curEval_, bestEval_)) {
+                best_ = cur_;
+                bestEval_ = curEval_;
+                bestRects_ = curRects_;
+                bestChanged_ = true;
+            }
+        }
+    }
+}
+
 void Chain::run(long long count) {
+    if (incremental_) {
+        runIncremental(count);
+        return;
+    }
     for (long long i = 0; i < count; ++i) {
         if (epochDone_ >= epochMoves_) restart(false);
         const double t = double(epochDone_) / double(epochMoves_);
@@ -61,6 +105,7 @@ void Chain::startFrom(const FloorTree& tree) {
     cur_ = tree;
     cur_.layout(p_.area, p_.outer, curRects_, scratch_, &p_.pins);
     curEval_ = evaluate(p_, curRects_, &curViolations_);
+    if (incremental_) cache_.reset(p_, curRects_);
     best_ = cur_;
     bestEval_ = curEval_;
     bestRects_ = curRects_;
@@ -97,7 +142,7 @@ void Chain::restart(bool first) {
     epochDone_ = 0;
     if (!first && settled_) { // the best plan, shaken once
         cur_ = best_;
-        mover_.propose(cur_, curRects_, curViolations_);
+        mover_.propose(cur_, curRects_, incremental_ ? cache_.violations() : curViolations_);
         startTemperature_ = settledTemperature;
     } else {
         // Chain 0 starts from the sketch as drawn.
@@ -107,6 +152,7 @@ void Chain::restart(bool first) {
     }
     cur_.layout(p_.area, p_.outer, curRects_, scratch_, &p_.pins);
     curEval_ = evaluate(p_, curRects_, &curViolations_);
+    if (incremental_) cache_.reset(p_, curRects_);
     if (first || better(curEval_, bestEval_)) {
         best_ = cur_;
         bestEval_ = curEval_;

@@ -6,7 +6,9 @@
 // shaking the best plan on generated briefs — until the chain is settled,
 // when epochs start from its best plan at a low temperature, for neighbours.
 // Deterministic for its seed. Running time per move: O(depth) for the move,
-// O(blocks) to lay the tree out and O(blocks · cut-outs + links) to cost it.
+// O(blocks) to lay the tree out and compare it, and O(blocks · cut-outs +
+// links) to cost it — from 40 blocks (without cut-outs among them) only the
+// moved blocks and their links are costed again (CostCache).
 #pragma once
 
 #include "search/detail/cost.h"
@@ -48,6 +50,7 @@ public:
 
 private:
     void restart(bool first);
+    void runIncremental(long long count);
     FloorTree freshSeed();
 
     const SearchProblem& p_;
@@ -62,6 +65,10 @@ private:
     std::vector<Rect> curRects_, trialRects_, bestRects_;
     std::vector<Violation> curViolations_, trialViolations_;
     Evaluation curEval_, bestEval_;
+    bool incremental_ = false; // large problems: costs kept term by term (CostCache)
+    CostCache cache_;
+    std::vector<int> changed_;
+    long long accepted_ = 0;
     FloorTree::Scratch scratch_;
 };
 

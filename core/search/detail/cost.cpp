@@ -147,4 +147,64 @@ Evaluation evaluate(const SearchProblem& p, const std::vector<Rect>& rect, std::
     return e;
 }
 
+void CostCache::reset(const SearchProblem& p, const std::vector<Rect>& rects, const CostWeights& w) {
+    block_.assign(p.blockCount(), {});
+    link_.assign(p.links.size(), {});
+    total_ = {};
+    for (int i = 0; i < p.blockCount(); ++i) {
+        blockTerm(p, i, rects, block_[i].e, &block_[i].v, w);
+        total_.cost += block_[i].e.cost;
+        total_.hard += block_[i].e.hard;
+    }
+    for (int l = 0; l < static_cast<int>(p.links.size()); ++l) {
+        linkTerm(p, l, rects, link_[l].e, &link_[l].v, w);
+        total_.cost += link_[l].e.cost;
+        total_.hard += link_[l].e.hard;
+    }
+    stamp_.assign(p.links.size(), 0);
+    stale_ = true;
+}
+
+Evaluation CostCache::trial(const SearchProblem& p, const std::vector<Rect>& rects, const std::vector<int>& changed,
+                            const CostWeights& w) {
+    newBlock_.clear();
+    newLink_.clear();
+    ++epoch_;
+    Evaluation t = total_;
+    for (int i : changed) {
+        Term term;
+        blockTerm(p, i, rects, term.e, &term.v, w);
+        t.cost += term.e.cost - block_[i].e.cost;
+        t.hard += term.e.hard - block_[i].e.hard;
+        newBlock_.emplace_back(i, std::move(term));
+        for (int l : p.linksOf[i]) {
+            if (stamp_[l] == epoch_) continue;
+            stamp_[l] = epoch_;
+            Term lt;
+            linkTerm(p, l, rects, lt.e, &lt.v, w);
+            t.cost += lt.e.cost - link_[l].e.cost;
+            t.hard += lt.e.hard - link_[l].e.hard;
+            newLink_.emplace_back(l, std::move(lt));
+        }
+    }
+    trialTotal_ = t;
+    return t;
+}
+
+void CostCache::commit() {
+    for (auto& [i, term] : newBlock_) block_[i] = std::move(term);
+    for (auto& [l, term] : newLink_) link_[l] = std::move(term);
+    total_ = trialTotal_;
+    stale_ = true;
+}
+
+const std::vector<Violation>& CostCache::violations() {
+    if (!stale_) return flat_;
+    flat_.clear();
+    for (const Term& t : block_) flat_.insert(flat_.end(), t.v.begin(), t.v.end());
+    for (const Term& t : link_) flat_.insert(flat_.end(), t.v.begin(), t.v.end());
+    stale_ = false;
+    return flat_;
+}
+
 } // namespace abut::detail

@@ -2,6 +2,7 @@
 #include "search/detail/zone_plan.h"
 
 #include "search/detail/chain.h"
+#include "search/detail/repair.h"
 
 #include <algorithm>
 #include <cmath>
@@ -265,39 +266,37 @@ FloorTree ZonePlanner::solve(const Level& l) {
     const SearchProblem& p = l.problem;
     const int B = p.blockCount();
     if (B == 1) return FloorTree(1);
+    std::vector<Rect> rects;
+    FloorTree::Scratch scratch;
+    if (B <= 4) { // few enough to try every slicing tree
+        FloorTree t = bestSmallTree(p, &moves_);
+        t.layout(p.area, p.outer, rects, scratch, &p.pins);
+        return t;
+    }
     Chain chain(p, static_cast<unsigned>(rng_()), 1, std::max<long long>(8000, 600LL * B));
-    const long long budget = 30000 + 4000LL * B, round = 5000;
+    long long budget = 30000 + 4000LL * B;
+    if (allowance_ > 0) budget = std::max(0LL, std::min(budget, allowance_ - moves_));
+    const long long round = 5000;
     int metRounds = 0;
     // A run: its line laid out first, then polished (the line is what a
     // planner draws; annealing from scratch rarely finds it for long runs).
     if (l.run.size() >= 2) {
         const FloorTree line = runStrip(l);
         if (line.valid()) chain.startFrom(line);
-        if (std::getenv("ABUT_DEBUG_ZONES"))
-        {
-            std::fprintf(stderr, "  run seed: %d pieces, hard %d cost %.3f outer %.1f x %.1f\n", static_cast<int>(l.run.size()),
-                         chain.bestEvaluation().hard, chain.bestEvaluation().cost, p.outer.width(), p.outer.depth());
-            std::vector<Violation> v;
-            evaluate(p, chain.bestRects(), &v);
-            for (std::size_t k = 0; k < v.size() && k < 12; ++k) {
-                const Rect& r = chain.bestRects()[v[k].block];
-                std::fprintf(stderr, "    %s block %d (room %d zone %d) %.2f,%.2f %.2fx%.2f other %d\n", toString(v[k].kind), v[k].block,
-                             l.room[v[k].block], l.zone[v[k].block], r.x0, r.y0, r.width(), r.depth(), v[k].other);
-            }
-        }
     }
-    for (long long spent = 0; spent < budget && metRounds < 2; spent += round) {
-        chain.run(round);
+    for (long long spent = 0; spent < budget && metRounds < 2;) {
+        const long long step = std::min(round, budget - spent);
+        chain.run(step);
+        spent += step;
+        moves_ += step;
         if (chain.bestEvaluation().hard == 0) ++metRounds;
     }
-    if (std::getenv("ABUT_DEBUG_ZONES")) {
-        std::string what;
-        std::vector<Violation> v;
-        evaluate(p, chain.bestRects(), &v);
-        for (const Violation& x : v)
-            if (x.kind != RequirementKind::Door || p.links.size()) what += std::string(toString(x.kind)) + " ";
-        std::fprintf(stderr, "  level: %d blocks, %zu outside, hard %d cost %.3f  %s\n", B, p.outside.size(),
-                     chain.bestEvaluation().hard, chain.bestEvaluation().cost, what.substr(0, 120).c_str());
+    if (B == 5 && chain.bestEvaluation().hard > 0 && (allowance_ <= 0 || moves_ < allowance_)) {
+        FloorTree t = bestSmallTree(p, &moves_);
+        t.layout(p.area, p.outer, rects, scratch, &p.pins);
+        if (Chain::better(evaluate(p, rects, nullptr), chain.bestEvaluation())) {
+            return t;
+        }
     }
     return chain.bestTree();
 }
@@ -332,7 +331,8 @@ std::vector<int> ZonePlanner::plannedOrder(const Level& l, std::vector<std::pair
     return out;
 }
 
-void ZonePlanner::plan(const std::function<bool()>& keepGoing) {
+void ZonePlanner::plan(const std::function<bool()>& keepGoing, long long moves) {
+    allowance_ = moves;
     std::deque<int> queue{0};
     std::vector<Rect>& rectOfZone = zoneRect_;
     rectOfZone.assign(zones_.zones.size(), full_.outer);
@@ -340,6 +340,7 @@ void ZonePlanner::plan(const std::function<bool()>& keepGoing) {
     FloorTree::Scratch scratch;
     while (!queue.empty()) {
         if (keepGoing && !keepGoing()) return;
+        if (allowance_ > 0 && moves_ >= allowance_) return;
         const int z = queue.front();
         queue.pop_front();
         levels_[z] = level(z, rectOfZone[z]);

@@ -38,8 +38,11 @@ public:
     ZonePlanner(const SearchProblem& full, const ZoneTree& zones, unsigned seed);
 
     // Plans every zone, top down. `keepGoing` is asked between levels; false
-    // stops early (the tree then holds what was planned, the rest as seeded).
-    void plan(const std::function<bool()>& keepGoing = {});
+    // stops early (the tree then holds what was planned, the rest as seeded),
+    // and so does spending `moves` chain moves and trees tried (0: no bound).
+    void plan(const std::function<bool()>& keepGoing = {}, long long moves = 0);
+    // Chain moves and trees tried so far.
+    long long movesUsed() const { return moves_; }
     // The floor tree over `full`'s blocks.
     FloorTree tree() const;
 
@@ -74,6 +77,8 @@ private:
     std::vector<FloorTree> trees_;  // per zone: its level's tree
     std::vector<char> planned_;     // per zone
     std::vector<Rect> zoneRect_;    // per zone: the rectangle it got
+    long long moves_ = 0;           // chain moves and trees tried
+    long long allowance_ = 0;       // at most (0: no bound)
 };
 
 } // namespace abut::detail
