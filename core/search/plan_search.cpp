@@ -17,8 +17,6 @@
 #include <memory>
 #include <set>
 #include <thread>
-#include <cstdio>
-#include <cstdlib>
 
 namespace abut {
 

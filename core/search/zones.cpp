@@ -2,11 +2,10 @@
 #include "search/zones.h"
 
 #include <algorithm>
-#include <cstdio>
-#include <cstdlib>
 #include <cctype>
 #include <deque>
 #include <map>
+#include <numeric>
 #include <set>
 #include <tuple>
 
@@ -333,27 +332,33 @@ private:
         // A ring of pieces (two runs joined by cross corridors, a ward's ring):
         // a component of the top circulation hubs in which each meets two
         // others; broken at its two smallest zones (the cross corridors) into runs.
-        std::vector<char> visited(n, 0);
-        for (int h = 0; h < n; ++h) {
-            if (!top(h) || visited[h]) continue;
+        // The component of top circulation hubs through h (marked in `seen`),
+        // and per member the top hubs it meets.
+        auto component = [&](int h, std::vector<char>& seen, std::vector<int>& degree) {
             std::vector<int> part{h}, stack{h};
-            visited[h] = 1;
-            bool twoEach = true;
+            seen[h] = 1;
+            degree.clear();
             while (!stack.empty()) {
                 const int v = stack.back();
                 stack.pop_back();
-                int degree = 0;
                 for (int u : g_.must[v]) {
                     if (!top(u)) continue;
-                    ++degree;
-                    if (!visited[u]) {
-                        visited[u] = 1;
+                    if (!seen[u]) {
+                        seen[u] = 1;
                         part.push_back(u);
                         stack.push_back(u);
                     }
                 }
-                twoEach = twoEach && degree == 2;
             }
+            for (int v : part) degree.push_back(static_cast<int>(std::count_if(g_.must[v].begin(), g_.must[v].end(), top)));
+            return part;
+        };
+        std::vector<int> degree;
+        std::vector<char> visited(n, 0);
+        for (int h = 0; h < n; ++h) {
+            if (!top(h) || visited[h]) continue;
+            std::vector<int> part = component(h, visited, degree);
+            const bool twoEach = std::all_of(degree.begin(), degree.end(), [](int d) { return d == 2; });
             if (!twoEach || part.size() < 4) continue;
             std::sort(part.begin(), part.end(), [&](int a, int b) { return held[hubZone_[a]] < held[hubZone_[b]]; });
             cut[part[0]] = cut[part[1]] = 1;
@@ -361,38 +366,17 @@ private:
         std::vector<char> seen(n, 0);
         for (int h = 0; h < n; ++h) {
             if (!top(h) || seen[h]) continue;
-            // The component of top circulation hubs through h.
-            std::vector<int> part{h}, stack{h};
-            seen[h] = 1;
-            int edges = 0, widest = 0;
-            while (!stack.empty()) {
-                const int v = stack.back();
-                stack.pop_back();
-                int degree = 0;
-                for (int u : g_.must[v]) {
-                    if (!top(u)) continue;
-                    ++degree;
-                    ++edges;
-                    if (!seen[u]) {
-                        seen[u] = 1;
-                        part.push_back(u);
-                        stack.push_back(u);
-                    }
-                }
-                widest = std::max(widest, degree);
-            }
-            edges /= 2;
+            const std::vector<int> part = component(h, seen, degree);
+            const int edges = std::accumulate(degree.begin(), degree.end(), 0) / 2;
+            const int widest = *std::max_element(degree.begin(), degree.end());
             if (part.size() < 2 || widest > 2 || edges != static_cast<int>(part.size()) - 1) continue;
             // In order along the path, from an end.
             int end = part.front();
-            for (int v : part) {
-                int degree = 0;
-                for (int u : g_.must[v]) degree += top(u) ? 1 : 0;
-                if (degree == 1) {
-                    end = v;
+            for (std::size_t k = 0; k < part.size(); ++k)
+                if (degree[k] == 1) {
+                    end = part[k];
                     break;
                 }
-            }
             std::vector<int> run{end};
             for (int prev = -1, v = end; run.size() < part.size();) {
                 int next = -1;

@@ -21,18 +21,35 @@ Chain::Chain(const SearchProblem& p, unsigned seed, int index, long long epochMo
     restart(true);
 }
 
+// One step's start: a new epoch when this one is done, the temperature
+// now, a move drawn (aimed at `misses`) on a copy of the current tree and
+// laid out. False when the move drawn does not apply.
+bool Chain::propose(const std::vector<Violation>& misses, double& temperature) {
+    if (epochDone_ >= epochMoves_) restart(false);
+    const double t = double(epochDone_) / double(epochMoves_);
+    temperature = startTemperature_ * std::pow(finalTemperature / startTemperature_, t);
+    ++epochDone_;
+    ++moves_;
+    trial_ = cur_;
+    if (!mover_.propose(trial_, curRects_, misses)) return false;
+    trial_.layout(p_.area, p_.outer, trialRects_, scratch_, &p_.pins);
+    return true;
+}
+
+void Chain::keepIfBest() {
+    if (!better(curEval_, bestEval_)) return;
+    best_ = cur_;
+    bestEval_ = curEval_;
+    bestRects_ = curRects_;
+    bestChanged_ = true;
+}
+
 // The same annealing with the cost kept term by term (large problems): a
 // move is measured by the blocks it moved and their links.
 void Chain::runIncremental(long long count) {
     for (long long i = 0; i < count; ++i) {
-        if (epochDone_ >= epochMoves_) restart(false);
-        const double t = double(epochDone_) / double(epochMoves_);
-        const double temperature = startTemperature_ * std::pow(finalTemperature / startTemperature_, t);
-        ++epochDone_;
-        ++moves_;
-        trial_ = cur_;
-        if (!mover_.propose(trial_, curRects_, cache_.violations())) continue;
-        trial_.layout(p_.area, p_.outer, trialRects_, scratch_, &p_.pins);
+        double temperature = 0;
+        if (!propose(cache_.violations(), temperature)) continue;
         changed_.clear();
         for (int b = 0; b < p_.blockCount(); ++b) {
             const Rect &x = trialRects_[b], &y = curRects_[b];
@@ -49,12 +66,7 @@ void Chain::runIncremental(long long count) {
                 cache_.reset(p_, curRects_);
                 curEval_ = cache_.total();
             }
-            if (better(curEval_, bestEval_)) {
-                best_ = cur_;
-                bestEval_ = curEval_;
-                bestRects_ = curRects_;
-                bestChanged_ = true;
-            }
+            keepIfBest();
         }
     }
 }
@@ -65,14 +77,8 @@ void Chain::run(long long count) {
         return;
     }
     for (long long i = 0; i < count; ++i) {
-        if (epochDone_ >= epochMoves_) restart(false);
-        const double t = double(epochDone_) / double(epochMoves_);
-        const double temperature = startTemperature_ * std::pow(finalTemperature / startTemperature_, t);
-        ++epochDone_;
-        ++moves_;
-        trial_ = cur_;
-        if (!mover_.propose(trial_, curRects_, curViolations_)) continue;
-        trial_.layout(p_.area, p_.outer, trialRects_, scratch_, &p_.pins);
+        double temperature = 0;
+        if (!propose(curViolations_, temperature)) continue;
         const Evaluation e = evaluate(p_, trialRects_, &trialViolations_);
         const double delta = e.cost - curEval_.cost;
         if (delta <= 0 || unit_(rng_) < std::exp(-delta / temperature)) {
@@ -80,12 +86,7 @@ void Chain::run(long long count) {
             std::swap(curRects_, trialRects_);
             std::swap(curViolations_, trialViolations_);
             curEval_ = e;
-            if (better(e, bestEval_)) {
-                best_ = cur_;
-                bestEval_ = e;
-                bestRects_ = curRects_;
-                bestChanged_ = true;
-            }
+            keepIfBest();
         }
     }
 }

@@ -51,6 +51,8 @@ public:
 private:
     void restart(bool first);
     void runIncremental(long long count);
+    bool propose(const std::vector<Violation>& misses, double& temperature);
+    void keepIfBest(); // the current plan as the best when it is better
     FloorTree freshSeed();
 
     const SearchProblem& p_;

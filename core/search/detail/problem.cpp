@@ -80,4 +80,34 @@ SearchProblem makeProblem(const Brief& brief, const Footprint& fp, const SearchO
     return p;
 }
 
+void finishPart(SearchProblem& p, const SearchProblem& full, const Rect& outer) {
+    const int B = p.blockCount();
+    p.linksOf.assign(B, {});
+    p.mustDegree.assign(B, 0);
+    for (int k = 0; k < static_cast<int>(p.links.size()); ++k) {
+        const SearchProblem::Link& l = p.links[k];
+        p.linksOf[l.a].push_back(k);
+        if (!p.isOutside(l.b)) p.linksOf[l.b].push_back(k);
+        if (l.must && l.door) {
+            ++p.mustDegree[l.a];
+            if (!p.isOutside(l.b)) ++p.mustDegree[l.b];
+        }
+    }
+    p.pinned.clear();
+    p.cutouts.clear();
+    p.pins.clear();
+    for (int k = 0; k < B; ++k)
+        if (p.blocks[k].pin) {
+            p.pinned.push_back(k);
+            if (p.blocks[k].cutout) p.cutouts.push_back(k);
+        }
+    if (!p.pinned.empty())
+        for (const SearchProblem::Block& b : p.blocks) p.pins.push_back(b.pin);
+    p.fp = full.fp;
+    p.bounds = full.bounds;
+    p.outer = outer;
+    p.scale = std::sqrt(std::max(outer.area(), 1e-12));
+    p.thresholds = full.thresholds;
+}
+
 } // namespace abut::detail

@@ -77,5 +77,11 @@ struct SearchProblem {
 // O(rooms + adjacencies). The areas are blockAreas' (search/plan_search.h).
 SearchProblem makeProblem(const Brief& brief, const Footprint& fp, const SearchOptions& options);
 
+// Completes the problem of a part of `full` (a zone's level, a part planned
+// afresh) once its blocks and links are set: the links indexed per block,
+// 'must' doors counted, held blocks listed, laid out in `outer`, the
+// footprint and thresholds as in `full`. O(blocks + links).
+void finishPart(SearchProblem& p, const SearchProblem& full, const Rect& outer);
+
 } // namespace detail
 } // namespace abut

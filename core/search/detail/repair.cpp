@@ -189,33 +189,11 @@ SearchProblem partProblem(const SearchProblem& f, const FloorTree& tree, const s
         }
         p.links.push_back(n);
     }
-    p.linksOf.resize(B);
-    p.mustDegree.assign(B, 0);
-    for (int k = 0; k < static_cast<int>(p.links.size()); ++k) {
-        const SearchProblem::Link& l = p.links[k];
-        p.linksOf[l.a].push_back(k);
-        if (!p.isOutside(l.b)) p.linksOf[l.b].push_back(k);
-        if (l.must && l.door) {
-            ++p.mustDegree[l.a];
-            if (!p.isOutside(l.b)) ++p.mustDegree[l.b];
-        }
-    }
-    for (int k = 0; k < B; ++k)
-        if (p.blocks[k].pin) {
-            p.pinned.push_back(k);
-            if (p.blocks[k].cutout) p.cutouts.push_back(k);
-        }
-    if (!p.pinned.empty())
-        for (const SearchProblem::Block& b : p.blocks) p.pins.push_back(b.pin);
     p.cutoutRects = f.cutoutRects;
     for (int c : f.cutouts)
         if (local[c] < 0) p.cutoutRects.push_back(rects[c]);
-    p.fp = f.fp;
-    p.bounds = f.bounds;
-    p.outer = outer;
-    p.scale = std::sqrt(std::max(outer.area(), 1e-12));
+    finishPart(p, f, outer);
     p.rooms = static_cast<int>(std::count_if(blocks.begin(), blocks.end(), [&](int b) { return b < f.rooms; }));
-    p.thresholds = f.thresholds;
     return p;
 }
 

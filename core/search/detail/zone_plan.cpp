@@ -8,8 +8,6 @@
 #include <cmath>
 #include <deque>
 #include <map>
-#include <cstdio>
-#include <cstdlib>
 #include <string>
 
 namespace abut::detail {
@@ -128,33 +126,11 @@ ZonePlanner::Level ZonePlanner::level(int z, const Rect& outer) const {
         if (fresh) p.outside.push_back(known_[other]);
         joinLink(p, linkIndex, inside, B + it->second, l);
     }
-    p.linksOf.resize(B);
-    p.mustDegree.assign(B, 0);
-    for (int k = 0; k < static_cast<int>(p.links.size()); ++k) {
-        const SearchProblem::Link& l = p.links[k];
-        p.linksOf[l.a].push_back(k);
-        if (!p.isOutside(l.b)) p.linksOf[l.b].push_back(k);
-        if (l.must && l.door) {
-            ++p.mustDegree[l.a];
-            if (!p.isOutside(l.b)) ++p.mustDegree[l.b];
-        }
-    }
     for (const SearchProblem::Block& b : p.blocks) p.area.push_back(b.area);
-    for (int k = 0; k < B; ++k)
-        if (p.blocks[k].pin) {
-            p.pinned.push_back(k);
-            if (p.blocks[k].cutout) p.cutouts.push_back(k);
-        }
-    if (!p.pinned.empty())
-        for (const SearchProblem::Block& b : p.blocks) p.pins.push_back(b.pin);
     if (z != 0)
         for (int r : f.cutouts) p.cutoutRects.push_back(*f.blocks[r].pin);
-    p.fp = f.fp;
-    p.bounds = f.bounds;
-    p.outer = outer;
-    p.scale = std::sqrt(std::max(outer.area(), 1e-12));
+    finishPart(p, f, outer);
     p.rooms = spare ? B - 1 : B;
-    p.thresholds = f.thresholds;
     return out;
 }
 
