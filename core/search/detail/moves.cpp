@@ -27,6 +27,19 @@ bool Moves::onExterior(int i, int a, Side s) const {
     return i != a && !p_.blocks[i].cutout && exteriorDistance(p_, *rects_, (*rects_)[i], s) <= p_.lineTolerance();
 }
 
+bool Moves::sharesMustNeighbour(int i, int a) const {
+    for (int li : p_.linksOf[a]) {
+        const SearchProblem::Link& l = p_.links[li];
+        if (!l.must) continue;
+        const int n = l.a == a ? l.b : l.a;
+        for (int lj : p_.linksOf[i]) {
+            const SearchProblem::Link& m = p_.links[lj];
+            if (m.must && (m.a == i ? m.b : m.a) == n) return true;
+        }
+    }
+    return false;
+}
+
 int Moves::touching(int b) {
     std::vector<int> near;
     for (int i = 0; i < p_.blockCount(); ++i)
@@ -118,7 +131,20 @@ bool Moves::atFacade(FloorTree& t, const Violation& v) {
         return out;
     };
     if (unit() < 0.5) { // swap with a block on that side
-        const std::vector<int> there = onSide();
+        std::vector<int> there = onSide();
+        if (!there.empty() && coin()) {
+            // Mostly with one that has no need of that side, better still
+            // one that opens on the same room (two offices on a corridor):
+            // a swap with a room that wants the side only moves the miss.
+            std::vector<int> free, near;
+            for (int i : there) {
+                if (p_.blocks[i].facade.has(s) || p_.blocks[i].facade.anySide) continue;
+                free.push_back(i);
+                if (sharesMustNeighbour(i, a)) near.push_back(i);
+            }
+            if (!near.empty() && coin()) there = std::move(near);
+            else if (!free.empty()) there = std::move(free);
+        }
         if (!there.empty()) {
             t.swapBlocks(a, there[randomInt(static_cast<int>(there.size()))]);
             return true;

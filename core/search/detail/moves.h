@@ -43,6 +43,8 @@ private:
     double unit() { return unit_(rng_); }
     // A node on the path from block b's leaf to the root, at most `up` steps up.
     int ancestorOf(const FloorTree& t, int block, int up) const;
+    // Whether blocks i and a both must open on one block (O(links of both)).
+    bool sharesMustNeighbour(int i, int a) const;
     // A block whose rectangle shares a wall with block b's (−1: none).
     int touching(int b);
     // Whether block i (not `a`, not a cut-out) lies on an exterior wall facing `s`.
