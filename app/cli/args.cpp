@@ -18,6 +18,11 @@ ParsedArgs parseArgs(const std::vector<std::string>& args, const std::set<std::s
                 p.ok = false;
                 return p;
             }
+            if (args[i + 1].empty()) { // `-o ""` printed only ": ; nothing written"
+                err << "abut-cli: option " << a << " needs a value, not an empty one\nusage: abut-cli " << usage << "\n";
+                p.ok = false;
+                return p;
+            }
             p.values[a] = args[++i];
         } else if (flags.count(a)) {
             p.flags.insert(a);

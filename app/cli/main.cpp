@@ -2,6 +2,9 @@
 // abut-cli: the command-line front end for batch use and tests. The commands
 // and exit codes follow the project's file-format contract.
 #include "cli_commands.h"
+#include "safe_text.h"
+
+#include <algorithm>
 
 #include <cstring>
 #include <iostream>
@@ -35,12 +38,25 @@ int main(int argc, char** argv) {
     }
     const std::string command = args[0];
     args.erase(args.begin());
-    if (command == "check") return abut::cli::runCheck(args, std::cout, std::cerr);
-    if (command == "plan") return abut::cli::runPlan(args, std::cout, std::cerr);
-    if (command == "labelings") return abut::cli::runLabelings(args, std::cout, std::cerr);
-    if (command == "export") return abut::cli::runExport(args, std::cout, std::cerr);
-    if (command == "extended") return abut::cli::runExtended(args, std::cout, std::cerr);
-    std::cerr << "abut-cli: unknown command \"" << command << "\"\n";
+    // Control characters from the input never reach the terminal as such.
+    abut::cli::SafeTextBuf errBuf(std::cerr.rdbuf()), outBuf(std::cout.rdbuf());
+    std::ostream err(&errBuf);
+    const bool json = command == "labelings" || std::find(args.begin(), args.end(), "--json") != args.end();
+    std::ostream safeOut(&outBuf);
+    std::ostream& out = json ? std::cout : safeOut;
+    int rc = -1;
+    if (command == "check") rc = abut::cli::runCheck(args, out, err);
+    else if (command == "plan") rc = abut::cli::runPlan(args, out, err);
+    else if (command == "labelings") rc = abut::cli::runLabelings(args, out, err);
+    else if (command == "export") rc = abut::cli::runExport(args, out, err);
+    else if (command == "extended") rc = abut::cli::runExtended(args, out, err);
+    if (rc >= 0) {
+        out.flush();
+        err.flush();
+        return rc;
+    }
+    err << "abut-cli: unknown command \"" << command << "\"\n";
+    err.flush();
     printUsage(std::cerr);
     return abut::cli::exitBadInput;
 }

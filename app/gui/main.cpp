@@ -13,6 +13,31 @@
 
 #include <iostream>
 
+namespace {
+
+// --size: each side of the window from 200 to 8192 pixels (8192 × 8192 is
+// 256 MB of picture).
+constexpr int minShotSide = 200, maxShotSide = 8192;
+
+// What the user typed, safe to print: control characters as \xNN.
+std::string printable(const QString& s) {
+    std::string out;
+    for (const char c : s.toStdString()) {
+        const auto u = static_cast<unsigned char>(c);
+        if (u < 0x20 || u == 0x7f) {
+            static const char hex[] = "0123456789ABCDEF";
+            out += "\\x";
+            out += hex[u >> 4];
+            out += hex[u & 15];
+        } else {
+            out += c;
+        }
+    }
+    return out;
+}
+
+} // namespace
+
 int main(int argc, char** argv) {
     QApplication app(argc, argv);
     QApplication::setApplicationName(QStringLiteral("Abut"));
@@ -52,8 +77,16 @@ int main(int argc, char** argv) {
     }
 
     if (parser.isSet(shotOpt)) {
+        // A stated limit: 30000 × 30000 took 7 GB of memory.
         const QStringList wh = parser.value(sizeOpt).split(QLatin1Char('x'));
-        if (wh.size() == 2) window.resize(wh[0].toInt(), wh[1].toInt());
+        bool wOk = false, hOk = false;
+        const int w = wh.size() == 2 ? wh[0].toInt(&wOk) : 0, h = wh.size() == 2 ? wh[1].toInt(&hOk) : 0;
+        if (!wOk || !hOk || w < minShotSide || h < minShotSide || w > maxShotSide || h > maxShotSide) {
+            std::cerr << "abut: --size takes WIDTHxHEIGHT in pixels, each from " << minShotSide << " to "
+                      << maxShotSide << " (got \"" << printable(parser.value(sizeOpt)) << "\")\n";
+            return 2;
+        }
+        window.resize(w, h);
         window.show();
         // The finished plans, not a computation under way, go in the picture.
         bool waitOk = false;
@@ -64,8 +97,9 @@ int main(int argc, char** argv) {
         }
         QTimer::singleShot(300, &window, [&] {
             const QString out = parser.value(shotOpt);
-            if (!window.screenshot(out, wait)) {
-                std::cerr << "abut: cannot write " << out.toStdString() << "\n";
+            QString why;
+            if (!window.screenshot(out, wait, &why)) {
+                std::cerr << "abut: " << printable(why) << "; nothing written\n";
                 QApplication::exit(2);
                 return;
             }

@@ -9,6 +9,7 @@
 #include "caution.h"
 #include "document.h"
 #include "embed/straight_line_drawing.h"
+#include "io/atomic_file.h"
 #include "io/csv_import.h"
 #include "io/project_io.h"
 #include "plan/plan_builder.h"
@@ -27,6 +28,7 @@
 #include <cstdio>
 
 #include <QAction>
+#include <QBuffer>
 #include <QActionGroup>
 #include <QApplication>
 #include <QElapsedTimer>
@@ -372,15 +374,30 @@ void MainWindow::hoverRoom(const QString& id) {
     planView_->setHighlightedRoom(id);
 }
 
-bool MainWindow::screenshot(const QString& path, double waitSeconds) {
+bool MainWindow::screenshot(const QString& path, double waitSeconds, QString* message) {
     QElapsedTimer waited;
     waited.start();
-    // Planning starts after a short delay; wait for it to start and end.
+    // Planning starts after a short delay; wait for it to start and end, at
+    // most `waitSeconds`: then the planning is stopped and what is on show
+    // goes in the picture.
     while ((planning() || checking()) && waited.elapsed() < qint64(1000 * waitSeconds))
         QApplication::processEvents(QEventLoop::AllEvents, 50);
+    planTimer_.stop();
+    runner_->cancel();
     QApplication::processEvents();
     sketch_->fitAll();
-    return grab().save(path);
+    // Encoded in memory, then written as every output is: a full disk keeps
+    // the previous picture.
+    QByteArray png;
+    QBuffer buffer(&png);
+    buffer.open(QIODevice::WriteOnly);
+    if (!grab().save(&buffer, "PNG")) {
+        if (message) *message = path + QStringLiteral(": the picture could not be encoded");
+        return false;
+    }
+    const WriteResult w = writeFileAtomically(path.toStdString(), png.toStdString());
+    if (!w.ok && message) *message = QString::fromStdString(w.message);
+    return w.ok;
 }
 
 } // namespace abut::gui

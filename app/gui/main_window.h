@@ -96,8 +96,10 @@ public slots:
     void tidyUp();
     void addRoomAt(const QPointF& sketchPos);
     // The window as a PNG once the plans and the check are done (at most
-    // `waitSeconds`): what --screenshot writes. False when it cannot be written.
-    bool screenshot(const QString& path, double waitSeconds);
+    // `waitSeconds`, then the planning is stopped): what --screenshot writes,
+    // through the atomic writer. False, with `message` ("PATH: why"), when
+    // it cannot be written; the previous file is then untouched.
+    bool screenshot(const QString& path, double waitSeconds, QString* message = nullptr);
     void renameRoom(const QString& id, const QString& name, const QString& mergeKey);
     void deleteSelection();
     void toggleKind();

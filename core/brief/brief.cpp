@@ -60,10 +60,20 @@ const SketchPoint* Brief::sketchPosition(const std::string& id) const {
 const char* toString(AdjacencyKind k) { return k == AdjacencyKind::Door ? "door" : "wall"; }
 const char* toString(Priority p) { return p == Priority::Must ? "must" : "should"; }
 
-std::size_t controlCharacterAt(const std::string& text) {
+std::size_t controlCharacterAt(const std::string& text, char32_t* code) {
+    auto at = [&](std::size_t i, char32_t cp) {
+        if (code) *code = cp;
+        return i;
+    };
     for (std::size_t i = 0; i < text.size(); ++i) {
         const unsigned char c = static_cast<unsigned char>(text[i]);
-        if (c < 0x20 || c == 0x7F) return i;
+        if (c < 0x20 || c == 0x7F) return at(i, c);
+        const unsigned char c1 = i + 1 < text.size() ? static_cast<unsigned char>(text[i + 1]) : 0;
+        if (c == 0xC2 && c1 >= 0x80 && c1 <= 0x9F) return at(i, c1);
+        if (c == 0xE2 && c1 == 0x80 && i + 2 < text.size()) {
+            const unsigned char c2 = static_cast<unsigned char>(text[i + 2]);
+            if (c2 == 0xA8 || c2 == 0xA9) return at(i, 0x2000 + c2 - 0x80);
+        }
     }
     return std::string::npos;
 }

@@ -68,10 +68,13 @@ inline constexpr double maxSketchCoordinate = 1e9;
 inline constexpr double minContactLength = 0.05;
 inline constexpr double minSpareSide = 0.3;
 
-// Index of the first control character (U+0000–U+001F or U+007F: tabs and
-// line breaks included) in `text`, or std::string::npos. Ids, names and
-// categories hold none.
-std::size_t controlCharacterAt(const std::string& text);
+// Byte index of the first control character or line break in `text` (UTF-8),
+// or std::string::npos: U+0000–U+001F (tabs included), U+007F, the C1
+// controls U+0080–U+009F (U+0085, the next-line mark, among them) and the
+// line and paragraph separators U+2028 and U+2029. `code` gets its code
+// point. Ids, names and categories hold none: they break exports, tables and
+// terminals.
+std::size_t controlCharacterAt(const std::string& text, char32_t* code = nullptr);
 
 enum class AdjacencyKind : std::uint8_t { Door, Wall };
 enum class Priority : std::uint8_t { Must, Should };

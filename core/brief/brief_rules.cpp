@@ -37,12 +37,18 @@ std::string numberProblem(double v, const std::string& what, double atLeast, dou
 }
 
 std::string textProblem(const std::string& text, const std::string& what) {
-    const std::size_t at = controlCharacterAt(text);
+    char32_t cp = 0;
+    const std::size_t at = controlCharacterAt(text, &cp);
     if (at == std::string::npos) return {};
-    char code[8];
-    std::snprintf(code, sizeof code, "U+%04X", static_cast<unsigned char>(text[at]));
-    return what + " holds a control character (" + code + ") at character " + std::to_string(at + 1) +
-           "; use plain text on one line";
+    char code[12];
+    std::snprintf(code, sizeof code, "U+%04X", static_cast<unsigned>(cp));
+    // Counted in characters, not bytes (continuation bytes are not counted).
+    std::size_t character = 1;
+    for (std::size_t i = 0; i < at; ++i)
+        if ((static_cast<unsigned char>(text[i]) & 0xC0) != 0x80) ++character;
+    const bool lineBreak = cp == 0x85 || cp == 0x2028 || cp == 0x2029;
+    return what + " holds " + (lineBreak ? "a line break" : "a control character") + " (" + code +
+           ") at character " + std::to_string(character) + "; use plain text on one line";
 }
 
 std::string doorWidthProblem(double w, const Footprint& fp) {

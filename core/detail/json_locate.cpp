@@ -1,11 +1,10 @@
 // SPDX-License-Identifier: MIT
 #include "detail/json_locate.h"
 
+#include <set>
 #include <vector>
 
 namespace abut::detail {
-
-namespace {
 
 std::string escapePointerToken(const std::string& token) {
     std::string out;
@@ -16,6 +15,8 @@ std::string escapePointerToken(const std::string& token) {
     }
     return out;
 }
+
+namespace {
 
 struct Frame {
     bool isArray = false;
@@ -121,6 +122,66 @@ std::size_t nestingTooDeep(std::string_view text, int maxDepth) {
         }
     }
     return std::string_view::npos;
+}
+
+DuplicateKey duplicateKeyAt(std::string_view text) {
+    struct Object {
+        std::set<std::string> keys;
+        Frame frame;
+    };
+    std::vector<Object> stack; // objects and arrays, as frames for the pointer
+    auto pointer = [&] {
+        std::vector<Frame> frames;
+        for (const Object& o : stack) frames.push_back(o.frame);
+        if (!frames.empty() && !frames.back().isArray) frames.pop_back(); // the object, not its member
+        return pointerOf(frames);
+    };
+    for (std::size_t i = 0; i < text.size();) {
+        const char c = text[i];
+        if (c == '{' || c == '[') {
+            if (!stack.empty() && stack.back().frame.isArray) ++stack.back().frame.index;
+            Object o;
+            o.frame.isArray = c == '[';
+            o.frame.expectKey = c == '{';
+            stack.push_back(std::move(o));
+            ++i;
+        } else if (c == '}' || c == ']') {
+            if (!stack.empty()) stack.pop_back();
+            ++i;
+        } else if (c == ',') {
+            if (!stack.empty() && !stack.back().frame.isArray) stack.back().frame.expectKey = true;
+            ++i;
+        } else if (c == '"') {
+            const std::size_t start = i++;
+            std::string s;
+            while (i < text.size() && text[i] != '"') {
+                if (text[i] == '\\' && i + 1 < text.size()) {
+                    const char e = text[i + 1];
+                    s += (e == 'n' ? '\n' : e == 't' ? '\t' : e);
+                    i += 2;
+                    continue;
+                }
+                s += text[i++];
+            }
+            ++i;
+            if (!stack.empty() && !stack.back().frame.isArray && stack.back().frame.expectKey) {
+                Object& o = stack.back();
+                o.frame.expectKey = false;
+                o.frame.key = s;
+                if (!o.keys.insert(s).second) return DuplicateKey{start, pointer(), s};
+            } else if (!stack.empty() && stack.back().frame.isArray) {
+                ++stack.back().frame.index;
+            }
+        } else {
+            // Whitespace, ':' and the characters of numbers, true, false, null.
+            if (!stack.empty() && stack.back().frame.isArray && c != ' ' && c != '\n' && c != '\t' && c != '\r' &&
+                (i == 0 || text[i - 1] == '[' || text[i - 1] == ',' || text[i - 1] == ' ' || text[i - 1] == '\n' ||
+                 text[i - 1] == '\t' || text[i - 1] == '\r'))
+                ++stack.back().frame.index;
+            ++i;
+        }
+    }
+    return {};
 }
 
 } // namespace abut::detail

@@ -12,7 +12,16 @@ namespace {
 
 std::string escaped(const std::string& s) {
     std::string out;
-    for (char c : s) {
+    for (std::size_t i = 0; i < s.size(); ++i) {
+        const char c = s[i];
+        // U+FFFE and U+FFFF (EF BF BE/BF in UTF-8) are not characters XML 1.0
+        // allows: a name holding one made the SVG not well-formed. U+FFFD instead.
+        if (static_cast<unsigned char>(c) == 0xEF && i + 2 < s.size() && static_cast<unsigned char>(s[i + 1]) == 0xBF &&
+            (static_cast<unsigned char>(s[i + 2]) == 0xBE || static_cast<unsigned char>(s[i + 2]) == 0xBF)) {
+            out += "\xEF\xBF\xBD";
+            i += 2;
+            continue;
+        }
         switch (c) {
         case '&': out += "&amp;"; break;
         case '<': out += "&lt;"; break;

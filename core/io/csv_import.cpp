@@ -2,6 +2,7 @@
 #include "io/csv_import.h"
 
 #include "brief/brief_edit.h"
+#include "brief/brief_rules.h"
 #include "io/atomic_file.h"
 
 #include <algorithm>
@@ -147,8 +148,8 @@ struct Importer {
                 error(rows[0].line, column(int(c), "") + "the header row needs a room name here");
                 continue;
             }
-            if (controlCharacterAt(label) != std::string::npos) {
-                error(rows[0].line, column(int(c), "") + "the room name holds a control character; use plain text");
+            if (const std::string problem = textProblem(label, "the room name"); !problem.empty()) {
+                error(rows[0].line, column(int(c), "") + problem);
                 continue;
             }
             for (std::size_t d = 1; d < c; ++d)
@@ -326,17 +327,29 @@ bool validUtf8(const std::string& s) {
 }
 
 // Spreadsheet programs often save CSV in a Windows code page: read it as
-// Latin-1 (ISO 8859-1), whose bytes are the first 256 code points.
+// Windows-1252, which is Latin-1 (ISO 8859-1: bytes as the first 256 code
+// points) but for 0x80–0x9F, where Latin-1 has C1 controls (refused in
+// names) and Windows-1252 has € ‚ ƒ „ … and the like (table from memory of
+// the WHATWG Encoding Standard; its five unassigned bytes become U+FFFD).
 std::string latin1ToUtf8(const std::string& s) {
+    static const char16_t windows1252[32] = {
+        0x20AC, 0xFFFD, 0x201A, 0x0192, 0x201E, 0x2026, 0x2020, 0x2021, 0x02C6, 0x2030, 0x0160,
+        0x2039, 0x0152, 0xFFFD, 0x017D, 0xFFFD, 0xFFFD, 0x2018, 0x2019, 0x201C, 0x201D, 0x2022,
+        0x2013, 0x2014, 0x02DC, 0x2122, 0x0161, 0x203A, 0x0153, 0xFFFD, 0x017E, 0x0178};
     std::string out;
-    out.reserve(s.size() * 2);
+    out.reserve(s.size() * 3);
     for (char ch : s) {
         const unsigned char c = static_cast<unsigned char>(ch);
-        if (c < 0x80) {
+        const unsigned cp = c >= 0x80 && c < 0xA0 ? windows1252[c - 0x80] : c;
+        if (cp < 0x80) {
             out += ch;
+        } else if (cp < 0x800) {
+            out += static_cast<char>(0xC0 | (cp >> 6));
+            out += static_cast<char>(0x80 | (cp & 0x3F));
         } else {
-            out += static_cast<char>(0xC0 | (c >> 6));
-            out += static_cast<char>(0x80 | (c & 0x3F));
+            out += static_cast<char>(0xE0 | (cp >> 12));
+            out += static_cast<char>(0x80 | ((cp >> 6) & 0x3F));
+            out += static_cast<char>(0x80 | (cp & 0x3F));
         }
     }
     return out;

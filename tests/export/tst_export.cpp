@@ -84,6 +84,18 @@ private slots:
         QVERIFY(rects >= static_cast<int>(brief_.rooms.size()));
     }
 
+    // A name holding U+FFFF (not a character XML 1.0 allows) still gives
+    // well-formed XML, read by QXmlStreamReader (it refused the old output).
+    void svgWithNoncharacterIsWellFormed() {
+        Brief b = brief_;
+        b.rooms.front().name = "Store \xEF\xBF\xBF room";
+        const std::string svg = planSvg(b, plan_.footprint, plan_.variants.front());
+        QXmlStreamReader xml(QByteArray::fromStdString(svg));
+        while (!xml.atEnd()) xml.readNext();
+        QVERIFY2(!xml.hasError(), qPrintable(xml.errorString()));
+        QVERIFY(svg.find("Store \xEF\xBF\xBD room") != std::string::npos);
+    }
+
     void csvHasARowPerRoom() {
         const std::string csv = scheduleCsv(areaSchedule(brief_, plan_.footprint, plan_.variants.front()));
         const QStringList lines = QString::fromStdString(csv).split(QLatin1Char('\n'), Qt::SkipEmptyParts);

@@ -52,6 +52,8 @@ private slots:
     void sampleLoads_data();
     void sampleLoads();
     void canonicalFileIsByteStable();
+    void refusedIdReportedOnce();
+    void longErrorListBounded();
     void unknownFieldsSurvive();
     void defaultsApplied();
     void failedSaveKeepsPreviousFile();
@@ -446,6 +448,33 @@ void TestProjectIo::facadeTooShortForItsRooms() {
     b.rooms[14].facade.add(Side::E); // 14 × 2.7 = 37.8 m: fits
     QVERIFY(shortFacade(b).empty());
 }
+
+// A room id refused as written is reported there, not again by each
+// adjacency naming it (it gave five lines for one cause).
+void TestProjectIo::refusedIdReportedOnce() {
+    std::string text = R"({"format": "abut.project", "version": 1, "units": "m", "rooms": [{"id": "a\u0007", "area": 9}, )"
+                       R"({"id": "b", "area": 9}], "adjacencies": [)";
+    for (int i = 0; i < 5; ++i) text += std::string(i ? ", " : "") + R"({"rooms": ["b", "a\u0007"], "kind": ")" + (i % 2 ? "door" : "wall") + "\"}";
+    text += "]}";
+    const LoadResult r = parseProject(text, "once.abut.json");
+    QVERIFY(!r.ok());
+    QCOMPARE(r.errors.size(), std::size_t(1));
+    QVERIFY(r.errors.front().toString().find("/rooms/0/id") != std::string::npos);
+}
+
+// 20,000 unknown rooms named: fifty problems with their lines, then a count
+// (finding every line read the file 20,000 times: 82 s).
+void TestProjectIo::longErrorListBounded() {
+    std::string text = R"({"format": "abut.project", "version": 1, "units": "m", "rooms": [{"id": "a", "area": 9}], "adjacencies": [)";
+    for (int i = 0; i < 20000; ++i) text += std::string(i ? ",\n" : "\n") + R"({"rooms": ["a", "x)" + std::to_string(i) + "\"]}";
+    text += "]}";
+    const LoadResult r = parseProject(text, "many.abut.json");
+    QVERIFY(!r.ok());
+    QCOMPARE(r.errors.size(), std::size_t(51));
+    QCOMPARE(r.errors[49].line, 51);
+    QVERIFY2(r.errors.back().message == "and 19950 more problems like these", r.errors.back().message.c_str());
+}
+
 
 QTEST_GUILESS_MAIN(TestProjectIo)
 #include "tst_project_io.moc"
