@@ -25,6 +25,26 @@ struct Frame {
     bool expectKey = false; // objects: next string is a key
 };
 
+// The string starting at the quote at `i` (escapes \n and \t decoded, any
+// other escaped character kept as itself); `i` ends past its closing quote,
+// `line` counts the line breaks passed.
+std::string readString(std::string_view text, std::size_t& i, int* line) {
+    std::string s;
+    ++i;
+    while (i < text.size() && text[i] != '"') {
+        if (text[i] == '\\' && i + 1 < text.size()) {
+            const char e = text[i + 1];
+            s += (e == 'n' ? '\n' : e == 't' ? '\t' : e);
+            i += 2;
+            continue;
+        }
+        if (text[i] == '\n' && line) ++*line;
+        s += text[i++];
+    }
+    ++i;
+    return s;
+}
+
 std::string pointerOf(const std::vector<Frame>& stack) {
     std::string p;
     for (const Frame& f : stack)
@@ -61,20 +81,8 @@ int lineOfJsonPointer(std::string_view text, const std::string& pointer) {
             continue;
         }
         if (c == '"') {
-            std::string s;
             const int startLine = line;
-            ++i;
-            while (i < text.size() && text[i] != '"') {
-                if (text[i] == '\\' && i + 1 < text.size()) {
-                    const char e = text[i + 1];
-                    s += (e == 'n' ? '\n' : e == 't' ? '\t' : e);
-                    i += 2;
-                    continue;
-                }
-                if (text[i] == '\n') ++line;
-                s += text[i++];
-            }
-            ++i;
+            const std::string s = readString(text, i, &line);
             if (!stack.empty() && !stack.back().isArray && stack.back().expectKey) {
                 stack.back().key = s;
                 stack.back().expectKey = false;
@@ -152,18 +160,8 @@ DuplicateKey duplicateKeyAt(std::string_view text) {
             if (!stack.empty() && !stack.back().frame.isArray) stack.back().frame.expectKey = true;
             ++i;
         } else if (c == '"') {
-            const std::size_t start = i++;
-            std::string s;
-            while (i < text.size() && text[i] != '"') {
-                if (text[i] == '\\' && i + 1 < text.size()) {
-                    const char e = text[i + 1];
-                    s += (e == 'n' ? '\n' : e == 't' ? '\t' : e);
-                    i += 2;
-                    continue;
-                }
-                s += text[i++];
-            }
-            ++i;
+            const std::size_t start = i;
+            const std::string s = readString(text, i, nullptr);
             if (!stack.empty() && !stack.back().frame.isArray && stack.back().frame.expectKey) {
                 Object& o = stack.back();
                 o.frame.expectKey = false;
