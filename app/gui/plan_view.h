@@ -11,6 +11,8 @@
 #include <optional>
 #include <set>
 
+class QPainter;
+
 namespace abut::gui {
 
 class PlanSession;
@@ -92,6 +94,19 @@ private:
     QRectF toScreen(const Rect& r) const;
     QPointF toPlan(const QPointF& screen) const; // clamped to the footprint
     Placement drawnCutout() const;               // the cut-out being drawn, snapped (empty: too small)
+    // The drawing, in the order paintEvent lays it down (plan_view_paint.cpp).
+    struct Label {
+        bool turned = false;    // set to run up the room
+        double lineHeight = 0;  // of the label's font, px
+    };
+    void paintTitle(QPainter& p) const;
+    void paintSparesAndCutouts(QPainter& p) const;
+    void paintRoom(QPainter& p, std::size_t i) const;
+    Label paintRoomLabel(QPainter& p, std::size_t i, const QRectF& box) const;
+    void paintRoomMarks(QPainter& p, std::size_t i, const QRectF& box, const Label& label) const;
+    void paintOutlineAndDrawnCutout(QPainter& p) const;
+    void paintDropped(QPainter& p) const;
+    void paintWallRange(QPainter& p) const;
 
     Brief brief_;
     Brief planned_; // brief_ as planned (targets grown with `surplus: spread`); the sizing problem refers to it

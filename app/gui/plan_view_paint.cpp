@@ -58,8 +58,16 @@ void PlanView::paintEvent(QPaintEvent*) {
         p.drawText(rect().adjusted(20, 20, -20, -20), Qt::AlignCenter | Qt::TextWordWrap, message_);
         return;
     }
+    paintTitle(p);
+    paintSparesAndCutouts(p);
+    for (std::size_t i = 0; i < v_.rooms.size() && i < brief_.rooms.size(); ++i) paintRoom(p, i);
+    paintOutlineAndDrawnCutout(p);
+    paintDropped(p);
+    paintWallRange(p);
+}
+
+void PlanView::paintTitle(QPainter& p) const {
     const QString u = QString::fromStdString(brief_.units);
-    const QString u2 = u + QChar(0x00B2);
     QFont title = font();
     title.setBold(true);
     p.setFont(title);
@@ -71,7 +79,9 @@ void PlanView::paintEvent(QPaintEvent*) {
                    .arg(fp_.depth, 0, 'f', 2)
                    .arg(u)
                    .arg(100.0 * v_.metrics.worstAreaError, 0, 'f', 1));
+}
 
+void PlanView::paintSparesAndCutouts(QPainter& p) const {
     for (const Rect& r : v_.spaces) {
         p.setPen(QPen(QColor(0x77, 0x77, 0x77), 1, Qt::DashLine));
         p.setBrush(QBrush(QColor(0xAA, 0xAA, 0xAA), Qt::BDiagPattern));
@@ -94,105 +104,122 @@ void PlanView::paintEvent(QPaintEvent*) {
             p.drawText(box, Qt::AlignCenter, tr("cut-out %1 (not building)").arg(k + 1));
         }
     }
-    for (std::size_t i = 0; i < v_.rooms.size() && i < brief_.rooms.size(); ++i) {
-        const Room& room = brief_.rooms[i];
-        const QRectF box = toScreen(v_.rooms[i]);
-        QColor fill = categoryColor(QString::fromStdString(room.category)).lighter(115);
-        p.setPen(QPen(ink, 1.2));
-        p.setBrush(fill);
-        p.drawRect(box);
-        const QString id = QString::fromStdString(room.id);
-        if (id == hovered_ || id == highlighted_) {
-            p.setPen(QPen(highlightInk, 3.5));
-            p.setBrush(Qt::NoBrush);
-            p.drawRect(box.adjusted(2, 2, -2, -2));
-        }
-        const double area = v_.rooms[i].area();
-        const double dev = (area - room.area) / room.area;
-        const QStringList lines{QString::fromStdString(room.displayName()),
-                                tr("%1 of %2 %3").arg(area, 0, 'f', 1).arg(room.area, 0, 'f', 1).arg(u2),
-                                deviationText(dev)};
-        // Narrow tall rooms get their label turned to run up the room, when
-        // that gives the larger text.
-        const QRectF inner = box.adjusted(4, 3, -4, -3);
-        QFont across = font(), up = font();
-        const double pxAcross = fitFont(across, lines, inner.width(), std::min(15.0, inner.height() / 3.6));
-        const double pxUp = fitFont(up, lines, inner.height(), std::min(15.0, inner.width() / 3.6));
-        const bool turn = pxUp > pxAcross * 1.2 && inner.height() > inner.width();
-        const QFont f = turn ? up : across;
-        p.save();
-        p.translate(inner.center());
-        if (turn) p.rotate(-90);
-        const QRectF local = turn ? QRectF(-inner.height() / 2, -inner.width() / 2, inner.height(), inner.width())
-                                  : QRectF(-inner.width() / 2, -inner.height() / 2, inner.width(), inner.height());
-        p.setFont(f);
-        p.setPen(ink);
-        const QFontMetricsF fm(f);
-        const double lh = fm.height();
-        if (lh * 3 <= local.height() + 1) {
-            for (int k = 0; k < 3; ++k)
-                p.drawText(QRectF(local.left(), -1.5 * lh + k * lh, local.width(), lh), Qt::AlignCenter,
-                           fm.elidedText(lines[k], Qt::ElideRight, local.width()));
-        } else if (lh <= local.height() + 1) {
-            p.drawText(local, Qt::AlignCenter, fm.elidedText(lines[0], Qt::ElideRight, local.width()));
-        }
-        p.restore();
-        // A room that misses something: a "!" tag in its top right corner
-        // (shape and text, not colour alone), and the first change that
-        // would meet it along its bottom edge where that fits.
-        if (i < notes_.size() && !notes_[i].isEmpty() && box.width() > 18 && box.height() > 18) {
-            const QRectF tag(box.right() - 17, box.top() + 3, 14, 14);
-            p.setPen(QPen(QColor(0x8B, 0x1A, 0x1A), 1.2));
-            p.setBrush(QColor(0xFF, 0xF4, 0xD6));
-            p.drawEllipse(tag);
-            QFont bold = font();
-            bold.setBold(true);
-            bold.setPixelSize(11);
-            p.setFont(bold);
-            p.drawText(tag, Qt::AlignCenter, QStringLiteral("!"));
-            if (!dimensions_ && !turn && !hint_[i].isEmpty() && box.height() > 3 * lh + 28 && box.width() > 90) {
-                QFont small = font();
-                small.setItalic(true);
-                small.setPixelSize(10);
-                p.setFont(small);
-                const QFontMetricsF sm(small);
-                p.drawText(box.adjusted(4, 2, -4, -3), Qt::AlignBottom | Qt::AlignHCenter,
-                           sm.elidedText(QStringLiteral("\u2192 ") + hint_[i], Qt::ElideRight, box.width() - 8));
-            }
-        }
-        if (room.fixed) {
-            // Fixed in place: a second, dash-dotted line inside its walls and
-            // the word, not colour alone.
-            p.setPen(QPen(ink, 1.2, Qt::DashDotLine));
-            p.setBrush(Qt::NoBrush);
-            p.drawRect(box.adjusted(4, 4, -4, -4));
+}
+
+void PlanView::paintRoom(QPainter& p, std::size_t i) const {
+    const Room& room = brief_.rooms[i];
+    const QRectF box = toScreen(v_.rooms[i]);
+    QColor fill = categoryColor(QString::fromStdString(room.category)).lighter(115);
+    p.setPen(QPen(ink, 1.2));
+    p.setBrush(fill);
+    p.drawRect(box);
+    const QString id = QString::fromStdString(room.id);
+    if (id == hovered_ || id == highlighted_) {
+        p.setPen(QPen(highlightInk, 3.5));
+        p.setBrush(Qt::NoBrush);
+        p.drawRect(box.adjusted(2, 2, -2, -2));
+    }
+    paintRoomMarks(p, i, box, paintRoomLabel(p, i, box));
+}
+
+// Name, area against target and deviation, set across the room or up it.
+PlanView::Label PlanView::paintRoomLabel(QPainter& p, std::size_t i, const QRectF& box) const {
+    const Room& room = brief_.rooms[i];
+    const QString u2 = QString::fromStdString(brief_.units) + QChar(0x00B2);
+    const double area = v_.rooms[i].area();
+    const double dev = (area - room.area) / room.area;
+    const QStringList lines{QString::fromStdString(room.displayName()),
+                            tr("%1 of %2 %3").arg(area, 0, 'f', 1).arg(room.area, 0, 'f', 1).arg(u2),
+                            deviationText(dev)};
+    // Narrow tall rooms get their label turned to run up the room, when
+    // that gives the larger text.
+    const QRectF inner = box.adjusted(4, 3, -4, -3);
+    QFont across = font(), up = font();
+    const double pxAcross = fitFont(across, lines, inner.width(), std::min(15.0, inner.height() / 3.6));
+    const double pxUp = fitFont(up, lines, inner.height(), std::min(15.0, inner.width() / 3.6));
+    const bool turn = pxUp > pxAcross * 1.2 && inner.height() > inner.width();
+    const QFont f = turn ? up : across;
+    p.save();
+    p.translate(inner.center());
+    if (turn) p.rotate(-90);
+    const QRectF local = turn ? QRectF(-inner.height() / 2, -inner.width() / 2, inner.height(), inner.width())
+                              : QRectF(-inner.width() / 2, -inner.height() / 2, inner.width(), inner.height());
+    p.setFont(f);
+    p.setPen(ink);
+    const QFontMetricsF fm(f);
+    const double lh = fm.height();
+    if (lh * 3 <= local.height() + 1) {
+        for (int k = 0; k < 3; ++k)
+            p.drawText(QRectF(local.left(), -1.5 * lh + k * lh, local.width(), lh), Qt::AlignCenter,
+                       fm.elidedText(lines[k], Qt::ElideRight, local.width()));
+    } else if (lh <= local.height() + 1) {
+        p.drawText(local, Qt::AlignCenter, fm.elidedText(lines[0], Qt::ElideRight, local.width()));
+    }
+    p.restore();
+    return {turn, lh};
+}
+
+// Tags and marks: what the room misses, fixed, locked, its dimensions.
+void PlanView::paintRoomMarks(QPainter& p, std::size_t i, const QRectF& box, const Label& label) const {
+    const Room& room = brief_.rooms[i];
+    // A room that misses something: a "!" tag in its top right corner
+    // (shape and text, not colour alone), and the first change that
+    // would meet it along its bottom edge where that fits.
+    if (i < notes_.size() && !notes_[i].isEmpty() && box.width() > 18 && box.height() > 18) {
+        const QRectF tag(box.right() - 17, box.top() + 3, 14, 14);
+        p.setPen(QPen(QColor(0x8B, 0x1A, 0x1A), 1.2));
+        p.setBrush(QColor(0xFF, 0xF4, 0xD6));
+        p.drawEllipse(tag);
+        QFont bold = font();
+        bold.setBold(true);
+        bold.setPixelSize(11);
+        p.setFont(bold);
+        p.drawText(tag, Qt::AlignCenter, QStringLiteral("!"));
+        if (!dimensions_ && !label.turned && !hint_[i].isEmpty() && box.height() > 3 * label.lineHeight + 28 && box.width() > 90) {
             QFont small = font();
+            small.setItalic(true);
             small.setPixelSize(10);
             p.setFont(small);
-            p.setPen(ink);
-            p.drawText(box.adjusted(6, 5, -6, -5), Qt::AlignTop | Qt::AlignLeft, tr("fixed"));
-        }
-        if (locked().count(int(i))) {
-            QFont small = font();
-            small.setPixelSize(10);
-            p.setFont(small);
-            p.drawText(box.adjusted(3, 2, -3, -2), Qt::AlignTop | Qt::AlignLeft, tr("locked"));
-        }
-        if (dimensions_) {
-            QFont small = font();
-            small.setPixelSize(10);
-            p.setFont(small);
-            p.setPen(QColor(0x33, 0x33, 0x33));
-            p.drawText(box.adjusted(2, 2, -2, -2), Qt::AlignBottom | Qt::AlignHCenter,
-                       QString::number(v_.rooms[i].width(), 'f', 2));
-            p.save();
-            p.translate(box.left() + 2, box.center().y());
-            p.rotate(-90);
-            p.drawText(QRectF(-box.height() / 2, 0, box.height(), 12), Qt::AlignCenter,
-                       QString::number(v_.rooms[i].depth(), 'f', 2));
-            p.restore();
+            const QFontMetricsF sm(small);
+            p.drawText(box.adjusted(4, 2, -4, -3), Qt::AlignBottom | Qt::AlignHCenter,
+                       sm.elidedText(QStringLiteral("\u2192 ") + hint_[i], Qt::ElideRight, box.width() - 8));
         }
     }
+    if (room.fixed) {
+        // Fixed in place: a second, dash-dotted line inside its walls and
+        // the word, not colour alone.
+        p.setPen(QPen(ink, 1.2, Qt::DashDotLine));
+        p.setBrush(Qt::NoBrush);
+        p.drawRect(box.adjusted(4, 4, -4, -4));
+        QFont small = font();
+        small.setPixelSize(10);
+        p.setFont(small);
+        p.setPen(ink);
+        p.drawText(box.adjusted(6, 5, -6, -5), Qt::AlignTop | Qt::AlignLeft, tr("fixed"));
+    }
+    if (locked().count(int(i))) {
+        QFont small = font();
+        small.setPixelSize(10);
+        p.setFont(small);
+        p.drawText(box.adjusted(3, 2, -3, -2), Qt::AlignTop | Qt::AlignLeft, tr("locked"));
+    }
+    if (dimensions_) {
+        QFont small = font();
+        small.setPixelSize(10);
+        p.setFont(small);
+        p.setPen(QColor(0x33, 0x33, 0x33));
+        p.drawText(box.adjusted(2, 2, -2, -2), Qt::AlignBottom | Qt::AlignHCenter,
+                   QString::number(v_.rooms[i].width(), 'f', 2));
+        p.save();
+        p.translate(box.left() + 2, box.center().y());
+        p.rotate(-90);
+        p.drawText(QRectF(-box.height() / 2, 0, box.height(), 12), Qt::AlignCenter,
+                   QString::number(v_.rooms[i].depth(), 'f', 2));
+        p.restore();
+    }
+}
+
+void PlanView::paintOutlineAndDrawnCutout(QPainter& p) const {
     // The footprint outline.
     p.setBrush(Qt::NoBrush);
     p.setPen(QPen(QColor(0x1F, 0x3A, 0x93), 3));
@@ -214,6 +241,9 @@ void PlanView::paintEvent(QPaintEvent*) {
                        tr("cut out %1 × %2").arg(c.width, 0, 'f', 2).arg(c.depth, 0, 'f', 2));
         }
     }
+}
+
+void PlanView::paintDropped(QPainter& p) const {
     // Dropped adjacencies: a dashed line between the rooms, × in the middle.
     QStringList droppedText;
     for (int a : v_.dropped) {
@@ -249,6 +279,9 @@ void PlanView::paintEvent(QPaintEvent*) {
             p.drawText(QRectF(36, y, width() - 60, lh), Qt::AlignLeft, line);
         }
     }
+}
+
+void PlanView::paintWallRange(QPainter& p) const {
     // While a wall is dragged: the range it may move in.
     if (drag_ == Drag::Wall) {
         const Handle& h = dragHandle_;

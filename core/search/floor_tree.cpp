@@ -255,6 +255,27 @@ int FloorTree::chainNodes(std::vector<int> nodes, bool vertical) {
     return nodes.front();
 }
 
+int FloorTree::copySubtree(const FloorTree& from, int node, const std::function<int(int)>& standIn, int skip) {
+    std::vector<int> order{node}, mapped(from.nodeCapacity(), -1);
+    for (std::size_t i = 0; i < order.size(); ++i) {
+        if (order[i] == skip) continue;
+        const Node& n = from.node(order[i]);
+        for (int k = 0; k < n.childCount(); ++k) order.push_back(n.child[k]);
+    }
+    for (std::size_t i = order.size(); i-- > 0;) {
+        const int v = order[i];
+        const Node& n = from.node(v);
+        if (v == skip || n.kind == Kind::Leaf) mapped[v] = standIn(v);
+        else if (n.kind == Kind::Cut) mapped[v] = makeCut(n.flag, mapped[n.child[0]], mapped[n.child[1]]);
+        else {
+            std::array<int, 5> parts{};
+            for (int k = 0; k < 5; ++k) parts[k] = mapped[n.child[k]];
+            mapped[v] = makeWheelOver(parts, n.flag);
+        }
+    }
+    return mapped[node];
+}
+
 bool FloorTree::gatherAround(int hub, const std::vector<int>& lower, const std::vector<int>& upper, bool alongX) {
     if (lower.empty() && upper.empty()) return false;
     std::vector<char> listed(leafOf_.size(), 0);

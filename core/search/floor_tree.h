@@ -22,6 +22,7 @@
 
 #include <array>
 #include <cstdint>
+#include <functional>
 #include <optional>
 #include <random>
 #include <vector>
@@ -64,6 +65,12 @@ public:
     int chain(const std::vector<int>& blocks, bool vertical);
     // The same over parentless nodes.
     int chainNodes(std::vector<int> nodes, bool vertical);
+    // Builds here the nodes of `from`'s subtree at `node`, children before
+    // parents, and returns its top node. `standIn(v)` gives the node (of this
+    // tree, parentless) that stands for `from`'s node v, asked for every leaf
+    // and for `skip` (≥ 0: a node whose subtree is not copied), when its turn
+    // comes. O(nodes of the subtree).
+    int copySubtree(const FloorTree& from, int node, const std::function<int(int)>& standIn, int skip = -1);
 
     // Rectangles of every block, areas exactly in proportion to `area` (per
     // block), filling `outer`. `scratch` is reused between calls.

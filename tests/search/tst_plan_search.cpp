@@ -97,6 +97,49 @@ private slots:
         }
     }
 
+    void aCopiedTreeLaysOutTheSame() {
+        // copySubtree over whole trees (pinwheels included) gives the same
+        // rectangles; with a subtree skipped and a chain of its blocks
+        // standing in, the tree is whole and every block is still in it.
+        std::mt19937 rng(11);
+        FloorTree::Scratch scratch;
+        std::vector<Rect> before, after;
+        for (int trial = 0; trial < 30; ++trial) {
+            const int n = 5 + trial;
+            std::vector<double> area(n);
+            for (double& a : area) a = std::uniform_real_distribution<double>(4, 40)(rng);
+            FloorTree t = randomTree(n, rng);
+            std::vector<int> inner;
+            for (int m = 0; m < 10; ++m) {
+                t.innerNodes(inner);
+                t.makeWheel(inner[std::uniform_int_distribution<std::size_t>(0, inner.size() - 1)(rng)], rng);
+            }
+            FloorTree copy(n);
+            copy.setRoot(copy.copySubtree(t, t.root(), [&](int v) { return copy.leafOf(t.node(v).block); }));
+            QVERIFY(copy.valid());
+            t.layout(area, {0, 0, 20, 20}, before, scratch);
+            copy.layout(area, {0, 0, 20, 20}, after, scratch);
+            for (int i = 0; i < n; ++i)
+                QVERIFY(after[i].x0 == before[i].x0 && after[i].y0 == before[i].y0 && after[i].x1 == before[i].x1 &&
+                        after[i].y1 == before[i].y1);
+
+            t.innerNodes(inner);
+            const int skip = inner[std::uniform_int_distribution<std::size_t>(0, inner.size() - 1)(rng)];
+            std::vector<int> under, stack{skip};
+            while (!stack.empty()) {
+                const FloorTree::Node& x = t.node(stack.back());
+                stack.pop_back();
+                if (x.kind == FloorTree::Kind::Leaf) under.push_back(x.block);
+                for (int k = 0; k < x.childCount(); ++k) stack.push_back(x.child[k]);
+            }
+            FloorTree grafted(n);
+            grafted.setRoot(grafted.copySubtree(
+                t, t.root(),
+                [&](int v) { return v == skip ? grafted.chain(under, true) : grafted.leafOf(t.node(v).block); }, skip));
+            QVERIFY(grafted.valid());
+        }
+    }
+
     void dualOfARandomTilingPassesTheCheckers() {
         // Tilings from random trees with pinwheels (points where four tiles
         // meet are nudged apart): the extended graph and labeling read off

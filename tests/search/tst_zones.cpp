@@ -58,6 +58,14 @@ bool partition(const ZoneTree& t, std::size_t rooms) {
     return std::all_of(seen.begin(), seen.end(), [](int n) { return n == 1; });
 }
 
+// The rectangles `t` gives the blocks of `p`.
+std::vector<Rect> layoutOf(const FloorTree& t, const detail::SearchProblem& p) {
+    std::vector<Rect> rects;
+    FloorTree::Scratch scratch;
+    t.layout(p.area, p.outer, rects, scratch);
+    return rects;
+}
+
 } // namespace
 
 class TestZones : public QObject {
@@ -148,9 +156,7 @@ private slots:
         QCOMPARE(l.run.size(), std::size_t(2));
         const FloorTree line = detail::ZonePlanner::runStrip(l);
         QVERIFY(line.valid());
-        std::vector<Rect> rects;
-        FloorTree::Scratch scratch;
-        line.layout(l.problem.area, l.problem.outer, rects, scratch);
+        const std::vector<Rect> rects = layoutOf(line, l.problem);
         QVERIFY(tilingProblem(rects, fp.width, fp.depth).isEmpty());
         // Every suite on its piece with a door-wide wall, the pieces meeting, every facade met.
         QCOMPARE(detail::evaluate(l.problem, rects, nullptr).hard, 0);
@@ -165,9 +171,7 @@ private slots:
         planner.plan();
         const FloorTree tree = planner.tree();
         QVERIFY(tree.valid());
-        std::vector<Rect> rects;
-        FloorTree::Scratch scratch;
-        tree.layout(p.area, p.outer, rects, scratch);
+        const std::vector<Rect> rects = layoutOf(tree, p);
         QVERIFY(tilingProblem(rects, fp.width, fp.depth).isEmpty());
         QCOMPARE(detail::evaluate(p, rects, nullptr).hard, 0); // an easy floor: met as planned
     }

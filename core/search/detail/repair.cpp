@@ -102,54 +102,13 @@ std::vector<int> leavesUnder(const FloorTree& t, int node) {
 
 int countUnder(const FloorTree& t, int node) { return static_cast<int>(leavesUnder(t, node).size()); }
 
-// Builds, in `out`, the nodes of `from`'s subtree at `node` (leaf blocks
-// mapped by `block`); returns its top node.
-int copyInto(FloorTree& out, const FloorTree& from, int node, const std::function<int(int)>& leaf) {
-    std::vector<int> order{node}, mapped(from.nodeCapacity(), -1);
-    for (std::size_t i = 0; i < order.size(); ++i) {
-        const FloorTree::Node& n = from.node(order[i]);
-        for (int k = 0; k < n.childCount(); ++k) order.push_back(n.child[k]);
-    }
-    for (std::size_t i = order.size(); i-- > 0;) {
-        const int v = order[i];
-        const FloorTree::Node& n = from.node(v);
-        if (n.kind == FloorTree::Kind::Leaf) mapped[v] = leaf(n.block);
-        else if (n.kind == FloorTree::Kind::Cut) mapped[v] = out.makeCut(n.flag, mapped[n.child[0]], mapped[n.child[1]]);
-        else {
-            std::array<int, 5> parts{};
-            for (int k = 0; k < 5; ++k) parts[k] = mapped[n.child[k]];
-            mapped[v] = out.makeWheelOver(parts, n.flag);
-        }
-    }
-    return mapped[node];
-}
-
 // `tree` with the subtree at `node` replaced by `part` (over the part's blocks `blocks`).
 FloorTree graft(const FloorTree& tree, int node, const FloorTree& part, const std::vector<int>& blocks) {
     FloorTree out(tree.blocks());
-    const std::function<int(int)> leaf = [&](int b) { return out.leafOf(b); };
-    const int partTop = copyInto(out, part, part.root(), [&](int k) { return out.leafOf(blocks[k]); });
+    const int partTop = out.copySubtree(part, part.root(), [&](int v) { return out.leafOf(blocks[part.node(v).block]); });
     // The rest, with the part's top standing in for `node`.
-    std::vector<int> order{tree.root()}, mapped(tree.nodeCapacity(), -1);
-    for (std::size_t i = 0; i < order.size(); ++i) {
-        const int v = order[i];
-        if (v == node) continue;
-        const FloorTree::Node& n = tree.node(v);
-        for (int k = 0; k < n.childCount(); ++k) order.push_back(n.child[k]);
-    }
-    for (std::size_t i = order.size(); i-- > 0;) {
-        const int v = order[i];
-        const FloorTree::Node& n = tree.node(v);
-        if (v == node) mapped[v] = partTop;
-        else if (n.kind == FloorTree::Kind::Leaf) mapped[v] = leaf(n.block);
-        else if (n.kind == FloorTree::Kind::Cut) mapped[v] = out.makeCut(n.flag, mapped[n.child[0]], mapped[n.child[1]]);
-        else {
-            std::array<int, 5> parts{};
-            for (int k = 0; k < 5; ++k) parts[k] = mapped[n.child[k]];
-            mapped[v] = out.makeWheelOver(parts, n.flag);
-        }
-    }
-    out.setRoot(mapped[tree.root()]);
+    out.setRoot(out.copySubtree(
+        tree, tree.root(), [&](int v) { return v == node ? partTop : out.leafOf(tree.node(v).block); }, node));
     return out;
 }
 
@@ -235,7 +194,7 @@ RepairResult repairTree(const SearchProblem& full, FloorTree& tree, std::mt19937
         std::vector<int> local(full.blockCount(), -1);
         for (int k = 0; k < B; ++k) local[blocks[k]] = k;
         FloorTree current(B);
-        if (B > 1) current.setRoot(copyInto(current, tree, node, [&](int b) { return current.leafOf(local[b]); }));
+        if (B > 1) current.setRoot(current.copySubtree(tree, node, [&](int v) { return current.leafOf(local[tree.node(v).block]); }));
         FloorTree candidate;
         if (B <= 5) {
             candidate = bestSmallTree(part, &out.moves);

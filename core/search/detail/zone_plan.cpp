@@ -351,26 +351,10 @@ int ZonePlanner::compose(FloorTree& out, int z) const {
     const Level& l = levels_[z];
     const FloorTree& t = trees_[z];
     // The level tree's nodes, children before parents, each mapped to a node of `out`.
-    std::vector<int> order{t.root()}, mapped(t.nodeCapacity(), -1);
-    for (std::size_t i = 0; i < order.size(); ++i) {
-        const FloorTree::Node& n = t.node(order[i]);
-        for (int k = 0; k < n.childCount(); ++k) order.push_back(n.child[k]);
-    }
-    for (std::size_t i = order.size(); i-- > 0;) {
-        const int v = order[i];
-        const FloorTree::Node& n = t.node(v);
-        if (n.kind == FloorTree::Kind::Leaf) {
-            const int k = n.block;
-            mapped[v] = l.room[k] >= 0 ? out.leafOf(l.room[k]) : compose(out, l.zone[k]); // nesting is shallow
-        } else if (n.kind == FloorTree::Kind::Cut) {
-            mapped[v] = out.makeCut(n.flag, mapped[n.child[0]], mapped[n.child[1]]);
-        } else {
-            std::array<int, 5> parts{};
-            for (int k = 0; k < 5; ++k) parts[k] = mapped[n.child[k]];
-            mapped[v] = out.makeWheelOver(parts, n.flag);
-        }
-    }
-    return mapped[t.root()];
+    return out.copySubtree(t, t.root(), [&](int v) {
+        const int k = t.node(v).block;
+        return l.room[k] >= 0 ? out.leafOf(l.room[k]) : compose(out, l.zone[k]); // nesting is shallow
+    });
 }
 
 FloorTree ZonePlanner::tree() const {
