@@ -3,9 +3,11 @@
 
 #include <algorithm>
 #include <cctype>
+#include <cstdint>
 #include <cstdio>
 #include <set>
 #include <sstream>
+#include <vector>
 
 namespace abut {
 
@@ -13,6 +15,60 @@ std::string dxfLayerOf(const std::string& category) {
     std::string out = "ROOM-";
     for (unsigned char c : category.empty() ? std::string("GENERAL") : category)
         out += std::isalnum(c) ? static_cast<char>(std::toupper(c)) : (c == '-' || c == '_' ? static_cast<char>(c) : '_');
+    if (out.size() <= dxfStringLimit) return out;
+    // Cut to the limit; the rest kept apart by a hash of the whole name
+    // (FNV-1a, 32 bits), so two long categories stay on two layers.
+    std::uint32_t h = 2166136261u;
+    for (unsigned char c : category) h = (h ^ c) * 16777619u;
+    char tail[16];
+    std::snprintf(tail, sizeof tail, "-%08X", static_cast<unsigned>(h));
+    return out.substr(0, dxfStringLimit - 9) + tail;
+}
+
+// One character of TEXT: printable ASCII as it is, but a backslash as
+// \U+005C (so that "\U+0042" in a name is not read as "B") and a percent
+// sign that would begin a control code ("%%d" is a degree sign) as "%%%",
+// the reference's single percent sign (Autodesk, "Control Codes and Special
+// Characters Reference"); other characters as \U+XXXX (four hex digits, so
+// readers decode only the Basic Multilingual Plane; beyond it U+FFFD, the
+// visible replacement character); control characters left out.
+namespace {
+std::string textPiece(char32_t cp, bool percentFollows) {
+    if (cp == '\\') return "\\U+005C";
+    if (cp == '%') return percentFollows ? "%%%" : "%";
+    if (cp < 0x80) return std::string(1, static_cast<char>(cp));
+    char buf[16];
+    std::snprintf(buf, sizeof buf, "\\U+%04X", static_cast<unsigned>(cp > 0xFFFF ? 0xFFFD : cp));
+    return buf;
+}
+} // namespace
+
+std::string dxfText(const std::string& utf8) {
+    std::vector<char32_t> cps;
+    for (std::size_t i = 0; i < utf8.size();) {
+        const unsigned char c = utf8[i];
+        char32_t cp = c;
+        int len = 1;
+        if (c >= 0xF0) { cp = c & 0x07; len = 4; }
+        else if (c >= 0xE0) { cp = c & 0x0F; len = 3; }
+        else if (c >= 0xC0) { cp = c & 0x1F; len = 2; }
+        for (int k = 1; k < len && i + k < utf8.size(); ++k) cp = (cp << 6) | (utf8[i + k] & 0x3F);
+        i += len;
+        // Control characters out first, so that "%", a control, "%" is not written as "%%".
+        if (cp >= 0x20 && cp != 0x7F) cps.push_back(cp);
+    }
+    std::string out;
+    const std::string ellipsis = "\\U+2026";
+    for (std::size_t k = 0; k < cps.size(); ++k) {
+        const std::string piece = textPiece(cps[k], k + 1 < cps.size() && cps[k + 1] == '%');
+        // Never past the limit, never cutting an escape in two: the last
+        // place that still holds an ellipsis says the name goes on.
+        const bool last = k + 1 == cps.size();
+        if (out.size() + piece.size() + (last ? 0 : ellipsis.size()) > dxfStringLimit) {
+            if (!last || out.size() + piece.size() > dxfStringLimit) return out + ellipsis;
+        }
+        out += piece;
+    }
     return out;
 }
 
@@ -39,31 +95,6 @@ private:
     std::ostringstream out_;
     int next_ = 0x20;
 };
-
-// DXF text is 8-bit in R2000; non-ASCII characters are written as \U+XXXX
-// (four hex digits, so readers decode only the Basic Multilingual Plane):
-// characters beyond U+FFFF, such as emoji, become U+FFFD, the visible
-// replacement character; control characters are left out.
-std::string dxfText(const std::string& utf8) {
-    std::string out;
-    for (std::size_t i = 0; i < utf8.size();) {
-        const unsigned char c = utf8[i];
-        unsigned cp = c;
-        int len = 1;
-        if (c >= 0xF0) { cp = c & 0x07; len = 4; }
-        else if (c >= 0xE0) { cp = c & 0x0F; len = 3; }
-        else if (c >= 0xC0) { cp = c & 0x1F; len = 2; }
-        for (int k = 1; k < len && i + k < utf8.size(); ++k) cp = (cp << 6) | (utf8[i + k] & 0x3F);
-        i += len;
-        if (cp < 0x80 && cp >= 0x20) out += static_cast<char>(cp);
-        else if (cp >= 0x80) {
-            char buf[16];
-            std::snprintf(buf, sizeof buf, "\\U+%04X", cp > 0xFFFF ? 0xFFFDu : cp);
-            out += buf;
-        }
-    }
-    return out;
-}
 
 // Handles are fixed where tables point at each other.
 namespace handle {

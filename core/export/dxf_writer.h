@@ -12,6 +12,7 @@
 #include "brief/brief.h"
 #include "plan/plan.h"
 
+#include <cstddef>
 #include <string>
 
 namespace abut {
@@ -24,7 +25,18 @@ struct DxfOptions {
 std::string planDxf(const Brief& brief, const Footprint& footprint, const PlanVariant& v,
                     const DxfOptions& options = {});
 
-// Layer name of a room category: "ROOM-" + letters, digits, '-' and '_' only.
+// The longest string a group may hold: 255 characters (the DXF reference's
+// limit for strings; longer ones are cut, with an ellipsis or a hash).
+inline constexpr std::size_t dxfStringLimit = 255;
+
+// Layer name of a room category: "ROOM-" + letters, digits, '-' and '_' only,
+// at most dxfStringLimit characters (a longer one cut and told apart by a hash).
 std::string dxfLayerOf(const std::string& category);
+
+// A name as TEXT content: 7-bit, at most dxfStringLimit characters (cut
+// short with "…"), with nothing a reader would take for a control code:
+// backslashes as \U+005C, a percent sign before another as "%%%",
+// non-ASCII as \U+XXXX, control characters left out.
+std::string dxfText(const std::string& utf8);
 
 } // namespace abut

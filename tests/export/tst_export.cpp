@@ -68,6 +68,39 @@ private slots:
         QVERIFY(std::count(lines.begin(), lines.end(), "LWPOLYLINE") >= static_cast<long>(brief_.rooms.size()));
     }
 
+    void dxfTextHasNoControlCodes_data() {
+        QTest::addColumn<QString>("name");
+        QTest::addColumn<QString>("written");
+        // Control codes of TEXT (Autodesk, "Control Codes and Special
+        // Characters Reference"): %%d is a degree sign, %%% one percent sign;
+        // \U+XXXX a character by its code point.
+        QTest::newRow("backslash") << "A\\U+0042" << "A\\U+005CU+0042";
+        QTest::newRow("degree code") << "50%%d" << "50%%%%d";
+        QTest::newRow("lone percent") << "100 %" << "100 %";
+        QTest::newRow("three percent") << "%%%" << "%%%%%%%";
+        QTest::newRow("percent, control, percent") << "a%\x01%d" << "a%%%%d";
+        QTest::newRow("accent") << QString::fromUtf8("Caf\u00e9") << "Caf\\U+00E9";
+    }
+    void dxfTextHasNoControlCodes() {
+        QFETCH(QString, name);
+        QFETCH(QString, written);
+        QCOMPARE(QString::fromStdString(dxfText(name.toStdString())), written);
+    }
+    void dxfStringsStayWithinTheLimit() {
+        const std::string text = dxfText(std::string(300, 'N'));
+        QVERIFY(text.size() <= dxfStringLimit);
+        QVERIFY(text.ends_with("\\U+2026")); // cut short with an ellipsis
+        std::string many;
+        for (int k = 0; k < 100; ++k) many += "\xC3\xA9"; // é, written as 7 characters each
+        const std::string e = dxfText(many);
+        QVERIFY(e.size() <= dxfStringLimit);
+        QCOMPARE(e.size() % 7, std::size_t(0)); // no escape cut in two
+        QCOMPARE(dxfText(std::string(255, 'y')).size(), std::size_t(255)); // exactly the limit: kept whole
+        const std::string l1 = dxfLayerOf(std::string(400, 'c')), l2 = dxfLayerOf(std::string(399, 'c') + "d");
+        QVERIFY(l1.size() <= dxfStringLimit && l2.size() <= dxfStringLimit);
+        QVERIFY(l1 != l2);
+    }
+
     void svgIsWellFormed() {
         const std::string svg = planSvg(brief_, plan_.footprint, plan_.variants.front());
         QXmlStreamReader xml(QByteArray::fromStdString(svg));
