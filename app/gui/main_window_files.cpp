@@ -11,6 +11,7 @@
 #include "caution.h"
 #include "document.h"
 #include "embed/straight_line_drawing.h"
+#include "io/atomic_file.h"
 #include "io/csv_import.h"
 #include "io/project_io.h"
 #include "plan/plan_builder.h"
@@ -67,6 +68,7 @@ void MainWindow::updateTitle() {
 
 
 bool MainWindow::openProject(const QString& path, QStringList* errors) {
+    removeStaleTemporaries(QFileInfo(path).absolutePath().toStdString()); // a save stopped hard last time
     const LoadResult r = loadProject(path.toStdString());
     if (!r.ok()) {
         QStringList lines;

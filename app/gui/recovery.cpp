@@ -20,6 +20,7 @@ Recovery::Recovery(const QString& folder)
     : folder_(folder.isEmpty() ? defaultFolder() : folder),
       session_(QUuid::createUuid().toString(QUuid::WithoutBraces)) {
     QDir().mkpath(folder_);
+    removeStaleTemporaries(folder_.toStdString()); // a save stopped hard last time
     lock_ = std::make_unique<QLockFile>(path(QStringLiteral(".lock")));
     // Held for the whole session: never stale by age, only when its process is gone.
     lock_->setStaleLockTime(0);

@@ -1,7 +1,11 @@
 // SPDX-License-Identifier: MIT
 #include "io/atomic_file.h"
 
+#include <array>
+#include <atomic>
 #include <cerrno>
+#include <chrono>
+#include <csignal>
 #include <cstdio>
 #include <cstdlib>
 #include <cstring>
@@ -9,8 +13,10 @@
 #include <sstream>
 #include <vector>
 
+#include <dirent.h>
 #include <fcntl.h>
 #include <sys/stat.h>
+#include <thread>
 #include <unistd.h>
 
 namespace abut {
@@ -55,7 +61,105 @@ std::optional<WriteFault> faultFromEnvironment() {
     return WriteFault{static_cast<std::size_t>(n)};
 }
 
+// ABUT_TEST_WRITE_PAUSE=MS (a test hook): wait this long after the first
+// bytes are written, so that a test can send a signal during a save.
+int pauseFromEnvironment() {
+    const char* v = std::getenv("ABUT_TEST_WRITE_PAUSE");
+    return v && *v ? std::atoi(v) : 0;
+}
+
+// Temporary files being written, for the signal handler to remove. A slot is
+// claimed with `state` 0 → 1, filled, then published as 2; the handler reads
+// only published slots (unlink is async-signal-safe).
+struct PendingSlot {
+    std::atomic<int> state{0};
+    char path[4096];
+};
+std::array<PendingSlot, 16> pending;
+
+extern "C" void removePendingAndDie(int sig) {
+    for (PendingSlot& p : pending)
+        if (p.state.load() == 2) ::unlink(p.path);
+    std::signal(sig, SIG_DFL);
+    std::raise(sig);
+}
+
+// On the first save, the usual ways of stopping a program (SIGTERM, SIGINT,
+// SIGHUP) get a handler that removes the temporary files, then stops as
+// before — unless the program already handles the signal itself.
+void installHandlersOnce() {
+    static const bool installed = [] {
+        for (int sig : {SIGTERM, SIGINT, SIGHUP}) {
+            struct sigaction now {};
+            if (::sigaction(sig, nullptr, &now) == 0 && now.sa_handler == SIG_DFL) {
+                struct sigaction act {};
+                act.sa_handler = removePendingAndDie;
+                sigemptyset(&act.sa_mask);
+                ::sigaction(sig, &act, nullptr);
+            }
+        }
+        return true;
+    }();
+    (void)installed;
+}
+
+class PendingFile {
+public:
+    explicit PendingFile(const std::string& path) {
+        if (path.size() >= sizeof(PendingSlot::path)) return;
+        for (PendingSlot& p : pending) {
+            int free = 0;
+            if (p.state.compare_exchange_strong(free, 1)) {
+                std::memcpy(p.path, path.c_str(), path.size() + 1);
+                p.state.store(2);
+                slot_ = &p;
+                return;
+            }
+        }
+    }
+    ~PendingFile() {
+        if (slot_) slot_->state.store(0);
+    }
+    PendingFile(const PendingFile&) = delete;
+    PendingFile& operator=(const PendingFile&) = delete;
+
+private:
+    PendingSlot* slot_ = nullptr;
+};
+
+const std::string tempPrefix = ".abut-save-";
+
 } // namespace
+
+int removeStaleTemporaries(const std::string& folder) {
+    DIR* dir = ::opendir(folder.empty() ? "." : folder.c_str());
+    if (!dir) return 0;
+    int removed = 0;
+    const auto now = std::chrono::system_clock::now();
+    while (const dirent* e = ::readdir(dir)) {
+        const std::string name = e->d_name;
+        if (name.rfind(tempPrefix, 0) != 0) continue;
+        const std::string full = (folder.empty() ? std::string(".") : folder) + "/" + name;
+        struct stat st {};
+        if (::lstat(full.c_str(), &st) != 0 || !S_ISREG(st.st_mode) || st.st_uid != ::getuid()) continue;
+        // ".abut-save-PID-XXXXXX": stale once that process is gone. Without a
+        // process number (written before it was part of the name): stale
+        // after ten minutes.
+        const std::string rest = name.substr(tempPrefix.size());
+        const auto dash = rest.find('-');
+        bool stale = false;
+        if (dash != std::string::npos && dash > 0 && rest.find_first_not_of("0123456789") == dash) {
+            const long pid = std::strtol(rest.substr(0, dash).c_str(), nullptr, 10);
+            stale = pid > 0 && pid != ::getpid() && ::kill(static_cast<pid_t>(pid), 0) != 0 && errno == ESRCH;
+        } else {
+            const auto modified = std::chrono::system_clock::from_time_t(st.st_mtime);
+            stale = now - modified > std::chrono::minutes(10);
+        }
+        if (stale && ::unlink(full.c_str()) == 0) ++removed;
+    }
+    ::closedir(dir);
+    return removed;
+}
 
 WriteResult writeFileAtomically(const std::string& given, const std::string& data,
                                 std::optional<WriteFault> fault) {
@@ -75,13 +179,17 @@ WriteResult writeFileAtomically(const std::string& given, const std::string& dat
                                                                                         : "a special file") +
                                "); give the path of a file to write"};
     }
-    std::string tmpl = folderOf(path) + "/.abut-save-XXXXXX";
+    installHandlersOnce();
+    removeStaleTemporaries(folderOf(path));
+    std::string tmpl = folderOf(path) + "/" + tempPrefix + std::to_string(::getpid()) + "-XXXXXX";
     std::vector<char> name(tmpl.begin(), tmpl.end());
     name.push_back('\0');
     const int fd = ::mkstemp(name.data());
     if (fd < 0)
         return {false, path + ": cannot create a temporary file beside it: " + std::strerror(errno)};
     const std::string tmpPath(name.data());
+    const PendingFile pendingFile(tmpPath); // removed by the handler if a signal stops us now
+    const int pause = pauseFromEnvironment();
 
     auto fail = [&](const std::string& why) {
         ::close(fd);
@@ -97,6 +205,7 @@ WriteResult writeFileAtomically(const std::string& given, const std::string& dat
     std::size_t written = 0;
     while (written < data.size()) {
         std::size_t chunk = data.size() - written;
+        if (pause > 0 && written == 0) chunk = (chunk + 1) / 2; // the test hook's pause comes half way
         if (fault && written + chunk > fault->failAfterBytes) {
             chunk = fault->failAfterBytes > written ? fault->failAfterBytes - written : 0;
             if (chunk == 0) return fail("write failed: no space left on device (simulated)");
@@ -107,6 +216,7 @@ WriteResult writeFileAtomically(const std::string& given, const std::string& dat
             return fail(std::string("write failed: ") + std::strerror(errno));
         }
         written += static_cast<std::size_t>(n);
+        if (pause > 0 && written < data.size()) std::this_thread::sleep_for(std::chrono::milliseconds(pause));
     }
     if (::fsync(fd) != 0) return fail(std::string("flush failed: ") + std::strerror(errno));
     if (::close(fd) != 0) {
