@@ -8,6 +8,8 @@
 #include <algorithm>
 #include <cctype>
 #include <map>
+#include <set>
+#include <unordered_map>
 
 namespace abut {
 
@@ -142,6 +144,7 @@ struct Importer {
             }
             return i;
         };
+        std::set<std::string> headerLabels;
         for (std::size_t c = 1; c < head.size(); ++c) {
             const std::string label = trimmed(head[c]);
             if (label.empty()) {
@@ -152,8 +155,7 @@ struct Importer {
                 error(rows[0].line, column(int(c), "") + problem);
                 continue;
             }
-            for (std::size_t d = 1; d < c; ++d)
-                if (trimmed(head[d]) == label) error(rows[0].line, column(int(c), label) + "room named twice");
+            if (!headerLabels.insert(label).second) error(rows[0].line, column(int(c), label) + "room named twice");
             colRoom[c] = roomFor(label);
         }
         // Marks per unordered pair of rooms, with where they were read.
@@ -210,18 +212,27 @@ struct Importer {
             }
         }
         if (!result.errors.empty()) return;
+        // The brief's adjacencies by their pair of rooms, looked up once each:
+        // a 1,000-room matrix holds up to half a million marks.
+        std::unordered_map<std::string, int> index;
+        for (std::size_t i = 0; i < brief.rooms.size(); ++i) index.emplace(brief.rooms[i].id, static_cast<int>(i));
+        std::map<std::pair<int, int>, int> existing;
+        for (std::size_t k = 0; k < brief.adjacencies.size(); ++k) {
+            const auto a = index.find(brief.adjacencies[k].a), b = index.find(brief.adjacencies[k].b);
+            if (a != index.end() && b != index.end())
+                existing.emplace(std::minmax(a->second, b->second), static_cast<int>(k));
+        }
         int added = 0, changed = 0;
         for (const auto& [pair, mark] : marks) {
-            const std::string& a = brief.rooms[pair.first].id;
-            const std::string& b = brief.rooms[pair.second].id;
-            const int existing = adjacencyIndex(brief, a, b);
-            if (existing >= 0) {
-                Adjacency& adj = brief.adjacencies[existing];
+            if (const auto it = existing.find(pair); it != existing.end()) {
+                Adjacency& adj = brief.adjacencies[it->second];
                 changed += adj.kind != mark.kind || adj.priority != mark.priority;
                 adj.kind = mark.kind;
                 adj.priority = mark.priority;
             } else {
-                addAdjacency(brief, Adjacency{a, b, mark.kind, mark.priority});
+                // Both rooms exist, they differ and the pair is new: what addAdjacency checks.
+                brief.adjacencies.push_back(
+                    Adjacency{brief.rooms[pair.first].id, brief.rooms[pair.second].id, mark.kind, mark.priority});
                 ++added;
             }
         }
