@@ -103,27 +103,44 @@ std::vector<std::pair<int, int>> joinComponents(PlaneGraph& g,
 
 std::vector<std::pair<int, int>> makeBiconnected(PlaneGraph& g, const EdgeFilter& allowed) {
     std::vector<std::pair<int, int>> added;
-    for (bool changed = true; changed;) {
-        changed = false;
-        for (const std::vector<int>& face : g.faces()) {
-            const int k = static_cast<int>(face.size());
-            std::vector<int> seen;
-            for (int i = 0; i < k && !changed; ++i) {
-                const int c = face[i];
-                if (std::count(face.begin(), face.end(), c) < 2) continue;
+    // Each edge a–b added in the angle a–c–b splits its face into the
+    // triangle a–c–b, with no room twice, and the face less that visit of c:
+    // a face is finished where it is, with no new face trace per edge (that
+    // was O(n²) traces of O(n) on a chain of rooms). Other faces keep their
+    // walks; an added edge only takes chances from them, never gives any.
+    std::vector<int> visits(g.vertexCount(), 0);
+    for (std::vector<int> face : g.faces()) {
+        for (int c : face) ++visits[c];
+        std::size_t i = 0, quiet = 0; // stop after a whole round with no edge added
+        while (face.size() > 2 && quiet < face.size()) {
+            const std::size_t k = face.size();
+            i %= k;
+            const int c = face[i];
+            bool joined = false;
+            if (visits[c] >= 2) {
                 const int a = face[(i + k - 1) % k], b = face[(i + 1) % k];
-                if (a == b || g.hasEdge(a, b) || (allowed && !allowed(a, b))) continue;
-                const std::vector<int> common = g.commonNeighbours(a, b);
-                if (common.size() != 1 || common[0] != c) continue;
-                // Walk: ... z → a → c → b → y ...; the new edge goes into the
-                // angle z–a–c at a (after c) and c–b–y at b (after y).
-                const int y = face[(i + 2) % k];
-                g.insertEdge(a, b, c, y);
-                added.emplace_back(a, b);
-                changed = true;
+                if (a != b && !g.hasEdge(a, b) && (!allowed || allowed(a, b))) {
+                    const std::vector<int> common = g.commonNeighbours(a, b);
+                    if (common.size() == 1 && common[0] == c) {
+                        // Walk: ... z → a → c → b → y ...; the new edge goes into the
+                        // angle z–a–c at a (after c) and c–b–y at b (after y).
+                        g.insertEdge(a, b, c, face[(i + 2) % k]);
+                        added.emplace_back(a, b);
+                        face.erase(face.begin() + static_cast<std::ptrdiff_t>(i));
+                        --visits[c];
+                        joined = true;
+                    }
+                }
             }
-            if (changed) break;
+            if (joined) {
+                quiet = 0;
+                i = (i + face.size() - 1) % face.size(); // a, whose next room is now b
+            } else {
+                ++quiet;
+                ++i;
+            }
         }
+        for (int c : face) visits[c] = 0;
     }
     return added;
 }

@@ -6,8 +6,8 @@
 // c has c as the only common neighbour, and a–c–b becomes a face.
 //
 // Precondition: `g` is a plane graph. Running time: joinComponents O(n + m)
-// (O(n·k) with sketch positions for k groups); makeBiconnected O(n·(n + m)) in
-// the worst case, one face pass per added edge.
+// (O(n·k) with sketch positions for k groups); makeBiconnected one face trace,
+// O(n + m), then per added edge O(length of its face + degree of its ends).
 #pragma once
 
 #include "brief/brief.h"
