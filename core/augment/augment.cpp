@@ -59,11 +59,11 @@ private:
 PlaneGraph Builder::embedDroppingCrossings() {
     std::vector<Edge> edges;
     std::vector<double> costs;
-    for (const Adjacency& a : ctx_.brief().adjacencies) {
-        edges.push_back(RouteContext::ordered(ctx_.brief().roomIndex(a.a), ctx_.brief().roomIndex(a.b)));
+    for (const auto& [a, b] : ctx_.brief().adjacencyRooms()) {
+        edges.push_back(RouteContext::ordered(a, b));
         costs.push_back(ctx_.cost(edges.back().first, edges.back().second));
     }
-    PlanarizedEmbedding planar = embedDroppingCheapest(n_, edges, costs, ctx_.sketch());
+    PlanarizedEmbedding planar = embedDroppingCheapest(n_, edges, costs, ctx_.sketch(), ctx_.options().keepGoing);
     // Name the first conflict, then each adjacency given up.
     for (std::size_t k = 0; k < planar.dropped.size(); ++k) {
         if (k == 0) {

@@ -20,6 +20,7 @@
 #include "brief/brief.h"
 #include "diagnostics.h"
 
+#include <functional>
 #include <string>
 #include <vector>
 
@@ -29,6 +30,11 @@ struct AugmentOptions {
     int cornerLimit = 500; // corner assignments listed per outer cycle
     int cornerChoice = 0;  // which of the ranked assignments to build (0 = best)
     int poleRouteGraphs = 1; // graphs kept from the pole route (alternative triangulations)
+    // Asked while a graph far from planar is cut down to a planar one (the
+    // one step that grows with the square of a pathological brief, such as
+    // 200 rooms that must all touch); false: the adjacencies not yet looked
+    // at are dropped (they are the cheapest). Empty: always go on.
+    std::function<bool()> keepGoing;
 };
 
 enum class AugmentStatus {

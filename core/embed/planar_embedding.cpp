@@ -141,13 +141,30 @@ EmbeddingResult embedPlanar(int n, const std::vector<std::pair<int, int>>& edges
     return result;
 }
 
+namespace {
+
+// Boyer–Myrvold's test alone: no embedding, no witness.
+bool isPlanar(int n, const std::vector<std::pair<int, int>>& edges) {
+    BoostGraph g(n);
+    for (const auto& [u, v] : edges) boost::add_edge(u, v, g);
+    int k = 0;
+    for (auto [it, end] = boost::edges(g); it != end; ++it) boost::put(boost::edge_index, g, *it, k++);
+    return boost::boyer_myrvold_planarity_test(g);
+}
+
+} // namespace
+
 PlanarizedEmbedding embedDroppingCheapest(int n, const std::vector<std::pair<int, int>>& edges,
                                           const std::vector<double>& cost,
-                                          const std::vector<std::optional<SketchPoint>>& sketch) {
+                                          const std::vector<std::optional<SketchPoint>>& sketch,
+                                          const std::function<bool()>& keepGoing) {
     PlanarizedEmbedding out;
+    bool going = true;
+    auto goOn = [&] { return going = going && (!keepGoing || keepGoing()); };
     std::vector<std::pair<int, int>> left = edges;
     std::vector<int> index(edges.size()); // position in `left` → index into `edges`
     for (std::size_t i = 0; i < index.size(); ++i) index[i] = static_cast<int>(i);
+    const std::size_t most = n >= 3 ? static_cast<std::size_t>(3 * n - 6) : static_cast<std::size_t>(n > 1);
     for (;;) {
         EmbeddingResult e = embedPlanar(n, left, sketch);
         if (e.status == EmbeddingStatus::Planar) {
@@ -164,7 +181,37 @@ PlanarizedEmbedding embedDroppingCheapest(int n, const std::vector<std::pair<int
         out.dropped.push_back(index[cheapest]);
         left.erase(left.begin() + cheapest);
         index.erase(index.begin() + cheapest);
+        // Drops still needed by Euler's formula alone.
+        const std::size_t excess = left.size() > most ? left.size() - most : 0;
+        if (out.dropped.size() + excess > witnessedDrops || !goOn()) break;
     }
+    // Far from planar (a complete graph of 200 rooms has 19,306 edges too
+    // many): a witness per drop would cost a test of all the edges left for
+    // each. The rest, dearest first (equal costs in input order), are kept
+    // while the graph stays planar, and once 3n − 6 are kept no more fit
+    // (Euler's formula): what is left is a maximal planar subgraph.
+    std::vector<int> order(left.size());
+    for (std::size_t i = 0; i < order.size(); ++i) order[i] = static_cast<int>(i);
+    std::stable_sort(order.begin(), order.end(), [&](int a, int b) { return cost[index[a]] > cost[index[b]]; });
+    std::vector<std::pair<int, int>> trial;
+    std::vector<char> keep(left.size(), 0);
+    for (int i : order) {
+        if (trial.size() < most && goOn()) {
+            trial.push_back(left[i]);
+            if (isPlanar(n, trial)) {
+                keep[i] = 1;
+                continue;
+            }
+            trial.pop_back();
+        }
+        out.dropped.push_back(index[i]);
+        out.witnesses.emplace_back(); // no witness: see the header
+    }
+    std::vector<std::pair<int, int>> kept; // in input order, as the witness loop leaves them
+    for (std::size_t i = 0; i < left.size(); ++i)
+        if (keep[i]) kept.push_back(left[i]);
+    out.embedding = embedPlanar(n, kept, sketch);
+    return out;
 }
 
 } // namespace abut

@@ -15,6 +15,7 @@
 #include "brief/brief.h"
 #include "graph/plane_graph.h"
 
+#include <functional>
 #include <optional>
 #include <string>
 #include <utility>
@@ -42,14 +43,24 @@ EmbeddingResult embedPlanar(int n, const std::vector<std::pair<int, int>>& edges
 // again. `witnesses` lists each Kuratowski subgraph found and `dropped` the
 // edge given up for it (indices into `edges`), in order; `embedding` is that
 // of the edges left. O(k·(n + m)) for k drops.
+// Once more than `witnessedDrops` drops in all are certain (Euler's formula:
+// more than 3n − 6 edges left), the graph is far from planar: the edges left
+// are then kept dearest first while the graph stays planar (at most 3n − 6,
+// by Euler's formula), and those that do not fit are dropped with an empty
+// witness — each breaks the planarity of the edges kept (a maximal planar
+// subgraph). O(m·n) for that part.
+inline constexpr std::size_t witnessedDrops = 64;
 struct PlanarizedEmbedding {
     EmbeddingResult embedding;             // Planar
     std::vector<std::vector<int>> witnesses; // per drop: the witness's edges
     std::vector<int> dropped;                // per drop: the edge given up
 };
+// `keepGoing` (empty: always) is asked between tests; once it says no, the
+// edges not yet looked at are dropped with an empty witness.
 PlanarizedEmbedding embedDroppingCheapest(int n, const std::vector<std::pair<int, int>>& edges,
                                           const std::vector<double>& cost,
-                                          const std::vector<std::optional<SketchPoint>>& sketch = {});
+                                          const std::vector<std::optional<SketchPoint>>& sketch = {},
+                                          const std::function<bool()>& keepGoing = {});
 
 // Pairs of input edges whose straight segments cross in the sketch (edges
 // sharing an endpoint never count). O(m²).
