@@ -1,6 +1,9 @@
 // SPDX-License-Identifier: MIT
 #include "brief/brief.h"
 
+#include <string_view>
+#include <unordered_map>
+
 #include <algorithm>
 #include <map>
 
@@ -34,6 +37,20 @@ int Brief::roomIndex(const std::string& id) const {
     for (std::size_t i = 0; i < rooms.size(); ++i)
         if (rooms[i].id == id) return static_cast<int>(i);
     return -1;
+}
+
+std::vector<std::pair<int, int>> Brief::adjacencyRooms() const {
+    std::unordered_map<std::string_view, int> index;
+    index.reserve(rooms.size());
+    for (std::size_t i = 0; i < rooms.size(); ++i) index.emplace(rooms[i].id, static_cast<int>(i));
+    auto at = [&](const std::string& id) {
+        const auto it = index.find(id);
+        return it == index.end() ? -1 : it->second;
+    };
+    std::vector<std::pair<int, int>> out;
+    out.reserve(adjacencies.size());
+    for (const Adjacency& a : adjacencies) out.emplace_back(at(a.a), at(a.b));
+    return out;
 }
 
 double Brief::totalTargetArea() const {

@@ -168,8 +168,12 @@ struct Brief {
     UnknownFields footprintUnknownFields; // fields of `footprint` beyond width, depth and cutouts, kept
     UnknownFields unknownFields;
 
-    // Index of the room with this id, or -1.
+    // Index of the room with this id, or -1. O(rooms): in a loop over the
+    // adjacencies use adjacencyRooms.
     int roomIndex(const std::string& id) const;
+    // Per adjacency, the indices of its two rooms (−1 for an id that is not
+    // a room's). O(rooms + adjacencies).
+    std::vector<std::pair<int, int>> adjacencyRooms() const;
     double totalTargetArea() const;
     // The given footprint, or a square-ish rectangle of the total target area.
     Footprint effectiveFootprint() const;

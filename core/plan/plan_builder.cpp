@@ -174,10 +174,12 @@ StageCheck checkVariant(const Brief& brief, const Footprint& fp, const PlanVaria
     if (std::abs(area - fp.width * fp.depth) > 1e-6 * fp.width * fp.depth) return StageCheck::failed("the footprint is not filled");
     // Every adjacency not listed as dropped has its wall, by the measure's own rule.
     const double line = lineTolerance(fp, t);
+    const std::vector<std::pair<int, int>> ends = brief.adjacencyRooms();
+    const std::set<int> dropped(v.dropped.begin(), v.dropped.end());
     for (std::size_t a = 0; a < brief.adjacencies.size(); ++a) {
-        if (std::count(v.dropped.begin(), v.dropped.end(), static_cast<int>(a))) continue;
+        if (dropped.count(static_cast<int>(a))) continue;
         const Adjacency& adj = brief.adjacencies[a];
-        const double wall = sharedWallLength(v.rooms[brief.roomIndex(adj.a)], v.rooms[brief.roomIndex(adj.b)], line);
+        const double wall = sharedWallLength(v.rooms[ends[a].first], v.rooms[ends[a].second], line);
         if (!wallMeets(wall, wallNeeded(brief, adj, t), t))
             return StageCheck::failed("adjacency " + adj.a + "–" + adj.b + " is not realised");
     }
@@ -416,7 +418,18 @@ void plan(Planning& run) {
         }
     AugmentOptions augment;
     augment.poleRouteGraphs = std::max(1, run.options.augmentations);
+    int asked = 0; // the caller is asked now and then, the clock every time
+    augment.keepGoing = [&run, &asked] {
+        return run.timeLeft() && (++asked % 64 != 0 || run.report(0.0, "drawing the adjacencies"));
+    };
     const AugmentResult aug = buildExtendedGraph(run.brief, augment);
+    if (run.stopped || !run.timeLeft()) { // the preparation took the time: nothing planned
+        run.outOfTime = !run.stopped;
+        plan.status = run.stopped ? PlanStatus::Cancelled : PlanStatus::NoPlan;
+        plan.summary = run.stopped ? "Stopped before any variant was found."
+                                   : "The time limit ended the work before any variant was found.";
+        return;
+    }
     plan.diagnostics = aug.diagnostics;
     if (aug.status == AugmentStatus::Empty || aug.status == AugmentStatus::Internal) {
         plan.status = aug.status == AugmentStatus::Empty ? PlanStatus::NoPlan : PlanStatus::Internal;
@@ -446,16 +459,20 @@ Plan planVariants(const Brief& given, const PlanOptions& options, const PlanMoni
 }
 
 Plan buildPlan(const Brief& given, const PlanOptions& options, const PlanMonitor* monitor) {
-    Planning run{given, plannedBrief(given), options, monitor, {}};
+    // What must give, for the best variant: a few re-sizings per requirement
+    // it misses, in a tenth of the time limit (0.2 to 2 s; 1 s without one)
+    // kept back from the planning, so that the limit covers the whole run.
+    const double relaxing = options.timeLimit > 0 ? std::clamp(0.1 * options.timeLimit, 0.2, 2.0) : 1.0;
+    PlanOptions planning = options;
+    if (options.relaxations && options.timeLimit > 0)
+        planning.timeLimit = std::max(0.5 * options.timeLimit, options.timeLimit - relaxing);
+    Planning run{given, plannedBrief(given), planning, monitor, {}};
     plan(run);
     Plan& plan = run.plan;
     const bool planned = !plan.variants.empty() && plan.status != PlanStatus::Internal;
-    // What must give, for the best variant: a few re-sizings per requirement it misses.
-    // Bounded: a tenth of the time limit (0.2 to 2 s), 1 s without one.
-    if (planned && !run.stopped && options.relaxations)
-        plan.variants.front().relaxations =
-            relaxationsFor(given, plan.footprint, plan.variants.front(), 12,
-                           options.timeLimit > 0 ? std::clamp(0.1 * options.timeLimit, 0.2, 2.0) : 1.0);
+    const double left = options.timeLimit > 0 ? std::min(relaxing, options.timeLimit - run.elapsed()) : relaxing;
+    if (planned && !run.stopped && options.relaxations && left > 0.01)
+        plan.variants.front().relaxations = relaxationsFor(given, plan.footprint, plan.variants.front(), 12, left);
     plan.stats.seconds = run.elapsed();
     if (planned && !run.stopped) run.report(1.0, "done");
     return std::move(plan);

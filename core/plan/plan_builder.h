@@ -18,7 +18,9 @@
 // footprint (stretching keeps every minimum). Rooms only roughly approach
 // their target areas here; core/size does the sizing.
 //
-// Running time: bounded by PlanOptions::timeLimit when one is set;
+// Running time: bounded by PlanOptions::timeLimit when one is set (the whole
+// run: the preparation, the routes, and what must give, which gets a tenth of
+// the limit kept back; past it, only a sizing already started is finished);
 // otherwise by the search's move budget (200,000 + 60,000 moves per room
 // and chain, O(V + E) each), the graph-first budgets (layoutBudget,
 // flipBudget sizings) and the relaxation budget (1 s).

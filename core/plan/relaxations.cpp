@@ -90,6 +90,7 @@ struct Verifier {
 
     int meets(const Brief& changed, const Footprint& changedFp, const UnmetItem& item, bool strict = true,
               bool replan = false) const {
+        if (haveDeadline && Clock::now() >= deadline) return 0; // out of time: not verified, not offered
         const SizingProblem problem(changed, v.extended, v.labeling, changedFp, planSizingOptions(changed));
         SizingResult r;
         if (changedFp == fp) {

@@ -76,14 +76,13 @@ std::vector<double> preferredAreas(const Brief& brief, const Footprint& fp, cons
 }
 
 SizedTiling sizeTiling(const Brief& brief, const Footprint& fp, const std::vector<Rect>& tiles,
-                       const SearchOptions& options) {
+                       const SearchOptions& options, const std::function<bool()>& inTime) {
     SizedTiling out;
     const int n = static_cast<int>(brief.rooms.size());
     std::vector<std::string> ids;
     for (const Room& r : brief.rooms) ids.push_back(r.id);
     std::set<std::pair<int, int>> wanted;
-    for (const Adjacency& a : brief.adjacencies)
-        wanted.insert(std::minmax(brief.roomIndex(a.a), brief.roomIndex(a.b)));
+    for (const auto& [a, b] : brief.adjacencyRooms()) wanted.insert(std::minmax(a, b));
     TilingDualOptions td;
     td.nudge = std::max(1.2 * options.anyWall, 1e-4 * std::max(fp.width, fp.depth));
     td.preferContact = [&](int a, int b) { return wanted.count(std::minmax(a, b)) > 0; };
@@ -95,7 +94,7 @@ SizedTiling sizeTiling(const Brief& brief, const Footprint& fp, const std::vecto
     SearchPlan arrangement;
     arrangement.extended = std::move(dual.extended);
     arrangement.labeling = std::move(dual.labeling);
-    out.sizings = detail::sizeArrangement(brief, fp, options, dual.rects, arrangement);
+    out.sizings = detail::sizeArrangement(brief, fp, options, dual.rects, arrangement, inTime);
     out.ok = true;
     return out;
 }
@@ -166,7 +165,11 @@ SearchResult searchPlans(const Brief& brief, const SearchOptions& options, Searc
     detail::PlanPool found(static_cast<std::size_t>(std::max(1, options.keep)) * 2);
 
     auto consider = [&](const std::vector<Rect>& rects) {
-        SizedTiling s = sizeTiling(brief, fp, rects, options);
+        // Sizing a tiling of 3,000 rooms takes seconds: past the time limit
+        // only a first plan is still sized.
+        if (options.timeLimit > 0 && elapsed() >= options.timeLimit && !found.plans().empty()) return;
+        SizedTiling s = sizeTiling(brief, fp, rects, options,
+                                   [&] { return options.timeLimit <= 0 || elapsed() < options.timeLimit; });
         if (!s.ok) return;
         SearchPlan best = detail::pickSizing(brief, p, std::move(s.sizings));
         const bool wasUsable = found.usable();

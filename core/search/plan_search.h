@@ -46,6 +46,7 @@
 #include "size/segment_sizing.h"
 
 #include <string>
+#include <functional>
 #include <vector>
 
 namespace abut {
@@ -127,6 +128,6 @@ struct SizedTiling {
     std::vector<SearchPlan> sizings; // misses and cost not yet judged
 };
 SizedTiling sizeTiling(const Brief& brief, const Footprint& footprint, const std::vector<Rect>& tiles,
-                       const SearchOptions& options);
+                       const SearchOptions& options, const std::function<bool()>& inTime = {});
 
 } // namespace abut

@@ -138,9 +138,10 @@ RequirementReport measureRequirements(const Brief& brief, const Footprint& fp, c
         }
     }
     out.meanAreaError = measured > 0 ? sumErr / measured : 0.0;
+    const std::vector<std::pair<int, int>> ends = brief.adjacencyRooms();
     for (std::size_t k = 0; k < brief.adjacencies.size(); ++k) {
         const Adjacency& a = brief.adjacencies[k];
-        const int u = brief.roomIndex(a.a), v = brief.roomIndex(a.b);
+        const auto [u, v] = ends[k];
         if (u < 0 || v < 0 || u >= static_cast<int>(rooms.size()) || v >= static_cast<int>(rooms.size())) continue;
         const double need = wallNeeded(brief, a, t), wall = sharedWallLength(rooms[u], rooms[v], tol);
         if (wallMeets(wall, need, t)) continue;

@@ -16,6 +16,8 @@
 
 #include <QtTest>
 
+#include <numeric>
+
 using namespace abut;
 using namespace abut::detail;
 using namespace abut::testing;
@@ -178,6 +180,45 @@ private slots:
         const std::vector<Rect> rects = layoutOf(p, zoneTree(p, zones, roughPositions(p, false, 0, rng), rng, 0));
         QVERIFY(tilingProblem(rects, 24, 12).isEmpty());
         for (int k = 1; k <= 8; ++k) QVERIFY(sharedWallLength(rects[0], rects[k], 1e-9) >= 0.9);
+    }
+
+    void aSplitSweepAddsUpAsTheLoopDoes() {
+        // SplitSweep against the plain sum over every block, per cut position,
+        // on random blocks (some held in place): the same to rounding.
+        std::mt19937 rng(5);
+        std::uniform_real_distribution<double> u(0.0, 1.0);
+        for (int trial = 0; trial < 20; ++trial) {
+            const int m = 5 + trial * 20;
+            std::vector<Point> pos(m), half(m);
+            std::vector<std::optional<Rect>> pin(m);
+            for (int j = 0; j < m; ++j) {
+                pos[j] = {50 * u(rng), 30 * u(rng)};
+                half[j] = {3 * u(rng), trial % 3 == 0 ? 0.0 : 2 * u(rng)};
+                if (j % 7 == 3) pin[j] = Rect{pos[j].x - 1, pos[j].y - 1, pos[j].x + 1, pos[j].y + 1};
+            }
+            for (const bool dir : {true, false}) {
+                std::vector<int> items(m);
+                std::iota(items.begin(), items.end(), 0);
+                std::sort(items.begin(), items.end(), [&](int a, int b) { return dir ? pos[a].x < pos[b].x : pos[a].y < pos[b].y; });
+                SplitSweep sweep;
+                sweep.start(items, pos, half, pin, dir);
+                for (int k = 1; k < m; ++k) {
+                    const double c = (dir ? 50.0 : 30.0) * k / m;
+                    double wrong = 0, through = 0, w = 0, t = 0;
+                    sweep.at(static_cast<std::size_t>(k), c, w, t);
+                    for (int j = 0; j < m; ++j) {
+                        const double at = dir ? pos[items[j]].x : pos[items[j]].y;
+                        const double reach = dir ? half[items[j]].x : half[items[j]].y;
+                        wrong += j < k ? std::max(0.0, at - c) : std::max(0.0, c - at);
+                        through += std::max(0.0, reach - std::abs(at - c));
+                        if (const std::optional<Rect>& f = pin[items[j]])
+                            wrong += 4.0 * (j < k ? std::max(0.0, (dir ? f->x1 : f->y1) - c) : std::max(0.0, c - (dir ? f->x0 : f->y0)));
+                    }
+                    QVERIFY2(std::abs(w - wrong) <= 1e-9 * (1 + wrong) && std::abs(t - through) <= 1e-9 * (1 + through),
+                             qPrintable(QString("trial %1 k %2: %3/%4 %5/%6").arg(trial).arg(k).arg(w).arg(wrong).arg(t).arg(through)));
+                }
+            }
+        }
     }
 
     void aChainIsTheSameForTheSameSeed() {

@@ -56,8 +56,10 @@ SearchProblem makeProblem(const Brief& brief, const Footprint& fp, const SearchO
         for (const SearchProblem::Block& b : p.blocks) p.pins.push_back(b.pin);
     p.linksOf.resize(p.blocks.size());
     p.mustDegree.assign(p.blocks.size(), 0);
-    for (const Adjacency& a : brief.adjacencies) {
-        const int u = brief.roomIndex(a.a), v = brief.roomIndex(a.b);
+    const std::vector<std::pair<int, int>> ends = brief.adjacencyRooms();
+    for (std::size_t k = 0; k < brief.adjacencies.size(); ++k) {
+        const Adjacency& a = brief.adjacencies[k];
+        const auto [u, v] = ends[k];
         if (u < 0 || v < 0 || u == v) continue;
         if (a.priority == Priority::Must && a.kind == AdjacencyKind::Door) ++p.mustDegree[u], ++p.mustDegree[v];
         SearchProblem::Link l;

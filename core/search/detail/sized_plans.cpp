@@ -11,7 +11,8 @@
 namespace abut::detail {
 
 std::vector<SearchPlan> sizeArrangement(const Brief& brief, const Footprint& fp, const SearchOptions& o,
-                                        const std::vector<Rect>& rects, const SearchPlan& arrangement) {
+                                        const std::vector<Rect>& rects, const SearchPlan& arrangement,
+                                        const std::function<bool()>& inTime) {
     std::vector<SearchPlan> out;
     const SizingOptions so = sizingOptionsFor(brief, o.anyWall, o.spareMinimum, o.grid);
     SizingProblem problem(brief, arrangement.extended, arrangement.labeling, fp, so);
@@ -27,6 +28,7 @@ std::vector<SearchPlan> sizeArrangement(const Brief& brief, const Footprint& fp,
         return out;
     }
     add(problem.solve(&start));
+    if (inTime && !inTime()) return out;
     bool offBand = false;
     for (std::size_t i = 0; i < brief.rooms.size(); ++i)
         offBand = offBand || std::abs(out.back().sized.rooms[i].deviation) > brief.rooms[i].tolerance();
@@ -37,6 +39,7 @@ std::vector<SearchPlan> sizeArrangement(const Brief& brief, const Footprint& fp,
         add(problem.solve(&start));
         problem.setOptions(so);
     }
+    if (inTime && !inTime()) return out;
     bool shortfall = false;
     for (const UnmetRequirement& u : start.unmet) shortfall = shortfall || u.kind == RequirementKind::MinWidth || u.kind == RequirementKind::Door;
     if (shortfall) {

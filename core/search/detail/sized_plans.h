@@ -10,6 +10,7 @@
 #include "search/detail/problem.h"
 #include "search/plan_search.h"
 
+#include <functional>
 #include <vector>
 
 namespace abut::detail {
@@ -19,9 +20,11 @@ namespace abut::detail {
 // targets; within their bands when the footprint has room to spare); when
 // that leaves a room off its band, with the bands free; when `rects` falls
 // short of a hard minimum, also with its shortfalls held
-// (SizingProblem::holdMinimumsAt). The caller judges which is best.
+// (SizingProblem::holdMinimumsAt). The caller judges which is best. The
+// second and third sizings only while `inTime` (empty: always) says so.
 std::vector<SearchPlan> sizeArrangement(const Brief& brief, const Footprint& fp, const SearchOptions& o,
-                                        const std::vector<Rect>& rects, const SearchPlan& arrangement);
+                                        const std::vector<Rect>& rects, const SearchPlan& arrangement,
+                                        const std::function<bool()>& inTime = {});
 
 // Misses, score, key and the search's own cost of a sized plan.
 void judge(const Brief& brief, const SearchProblem& p, SearchPlan& plan);
