@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: MIT
 #include "cli_commands.h"
 
+#include "diagnostics.h"
+
 #include "io/project_io.h"
 
 #include <filesystem>
@@ -50,6 +52,23 @@ bool refuseToOverwriteInput(const std::string& input, const std::string& target,
         return false;
     }
     return true;
+}
+
+void printDiagnostics(std::ostream& out, const std::vector<Diagnostic>& diagnostics, bool (*show)(const Diagnostic&),
+                      const std::string& where, int perCode) {
+    std::map<DiagnosticCode, int> shown, more;
+    for (const Diagnostic& d : diagnostics) {
+        if (!show(d)) continue;
+        if (shown[d.code] < perCode) {
+            ++shown[d.code];
+            out << "  " << toString(d.severity) << ": " << d.message << "\n";
+        } else {
+            ++more[d.code];
+        }
+    }
+    for (const auto& [code, count] : more)
+        out << "  … and " << count << " more like the " << perCode << " above (" << toString(code) << "; " << where
+            << ").\n";
 }
 
 } // namespace abut::cli

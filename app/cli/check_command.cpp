@@ -136,10 +136,8 @@ int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostre
             << "\n";
     }
     out << "\n" << summary << "\n";
-    for (const Diagnostic& d : diagnostics) {
-        if (costsTheBriefNothing(d)) continue;
-        out << "  " << toString(d.severity) << ": " << d.message << "\n";
-    }
+    printDiagnostics(out, diagnostics, [](const Diagnostic& d) { return !costsTheBriefNothing(d); },
+                     "use --json for the list");
     int added = 0;
     for (const Diagnostic& d : diagnostics) added += costsTheBriefNothing(d);
     if (added > 0)

@@ -9,6 +9,7 @@
 
 namespace abut {
 struct LoadResult;
+struct Diagnostic;
 }
 
 namespace abut::cli {
@@ -39,6 +40,13 @@ bool loadOrReport(const std::string& path, LoadResult& out, std::ostream& err);
 
 // False (with a message) when `target` is the same file as `input`.
 bool refuseToOverwriteInput(const std::string& input, const std::string& target, std::ostream& err);
+
+// Writes "  severity: message" per diagnostic that `show` accepts, at most
+// `perCode` of each code, then one line saying how many more like them
+// there are and `where` to find them all (a 200-room complete graph drops
+// 19,000 adjacencies: a terminal needs the first few).
+void printDiagnostics(std::ostream& out, const std::vector<Diagnostic>& diagnostics, bool (*show)(const Diagnostic&),
+                      const std::string& where, int perCode = 20);
 
 int runCheck(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);
 int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostream& err);

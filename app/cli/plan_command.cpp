@@ -91,8 +91,8 @@ int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostrea
     if (strict && plan.status == PlanStatus::Compromised) {
         err << path << ": no plan keeps every 'must' adjacency and facade wish (--strict): " << plan.summary
             << "\n";
-        for (const Diagnostic& d : plan.diagnostics)
-            if (d.severity != Severity::Info) err << "  " << d.message << "\n";
+        printDiagnostics(err, plan.diagnostics, [](const Diagnostic& d) { return d.severity != Severity::Info; },
+                         "abut-cli check --json lists them all");
         return exitNoPlan;
     }
     const WriteResult w = writeFileAtomically(target, serializePlan(loaded.brief, plan));
@@ -101,8 +101,8 @@ int runPlan(const std::vector<std::string>& args, std::ostream& out, std::ostrea
         return exitBadInput;
     }
     out << target << ": " << plan.variants.size() << " variant(s); " << plan.summary << "\n";
-    for (const Diagnostic& d : plan.diagnostics)
-        if (d.severity != Severity::Info) out << "  " << toString(d.severity) << ": " << d.message << "\n";
+    printDiagnostics(out, plan.diagnostics, [](const Diagnostic& d) { return d.severity != Severity::Info; },
+                     "abut-cli check --json lists them all");
     // What the best variant does not meet, so the output never says less than the plan shows.
     const std::vector<UnmetItem> unmet = unmetRequirements(loaded.brief, plan.footprint, plan.variants.front());
     if (unmet.empty()) {

@@ -6,12 +6,17 @@
 //   abut_bench augment    brief → extended graph
 //   abut_bench labelings  enumeration speed against one checker pass
 //   abut_bench sizing     re-sizing time, cold and warm
+//   abut_bench input      big input: a CSV adjacency matrix of 300 and 1,000
+//                         rooms imported; the brief check (no search) of
+//                         chains of 2,000 and 10,000 rooms
 //   abut_bench gui        the editor's worst event-loop delay while it
 //                         computes the plans of the largest sample
 //                         (offscreen; only when built with the editor)
 // Targets (not enforced here): linear scaling, and the pipeline at most 3× the
 // planarity test.
 #include "augment/augment.h"
+#include "io/csv_import.h"
+#include "plan/brief_check.h"
 #include "dual/rectangular_dual.h"
 #include "label/labeling_lattice.h"
 #include "size/segment_sizing.h"
@@ -21,6 +26,8 @@
 
 #include <boost/graph/adjacency_list.hpp>
 #include <boost/graph/boyer_myrvold_planar_test.hpp>
+
+#include <string>
 
 #ifdef ABUT_BENCH_GUI
 #include "main_window.h"
@@ -204,12 +211,47 @@ void guiLatency(int argc, char** argv) {
 }
 #endif
 
+// Big input stays near-linear: an n × n matrix (every room beside the next
+// two, as a corridor's rooms are), and a chain of rooms checked without a search.
+void input() {
+    for (int n : {300, 1000}) {
+        std::string csv = "room";
+        for (int c = 0; c < n; ++c) csv += ",R" + std::to_string(c);
+        csv += "\n";
+        for (int r = 0; r < n; ++r) {
+            csv += "R" + std::to_string(r);
+            for (int c = 0; c < n; ++c) csv += std::abs(r - c) == 1 || std::abs(r - c) == 2 ? ",D" : ",";
+            csv += "\n";
+        }
+        Brief into;
+        std::size_t adjacencies = 0;
+        const double t = bestOf(1, [&] { adjacencies = importCsv(csv, "bench.csv", into).brief.adjacencies.size(); });
+        std::printf("input/csv_matrix_%d: %.3f s (%zu adjacencies, %zu kB)\n", n, t, adjacencies, csv.size() / 1024);
+    }
+    for (int n : {2000, 10000}) {
+        Brief b;
+        for (int k = 0; k < n; ++k) {
+            Room r;
+            r.id = "r" + std::to_string(k);
+            r.area = 12;
+            b.rooms.push_back(r);
+            if (k > 0) b.adjacencies.push_back(Adjacency{"r" + std::to_string(k - 1), r.id, AdjacencyKind::Door, Priority::Must});
+        }
+        b.footprint = Footprint{std::sqrt(12.0 * n), std::sqrt(12.0 * n), {}};
+        BriefCheckOptions o;
+        o.searchMoves = -1; // the check itself, no search
+        const double t = bestOf(1, [&] { checkBrief(b, o); });
+        std::printf("input/check_chain_%d: %.3f s\n", n, t);
+    }
+}
+
 int main(int argc, char** argv) {
     const std::string only = argc > 1 ? argv[1] : "";
     if (only.empty() || only == "pipeline") pipeline();
     if (only.empty() || only == "augment") augment();
     if (only.empty() || only == "labelings") labelings();
     if (only.empty() || only == "sizing") sizing();
+    if (only.empty() || only == "input") input();
 #ifdef ABUT_BENCH_GUI
     if (only.empty() || only == "gui") guiLatency(argc, argv);
 #endif

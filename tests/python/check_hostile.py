@@ -11,11 +11,17 @@ py_hostile_input):
   module;
 - a name beyond U+FFFF (an emoji) comes out of the DXF as U+FFFD, read back
   with ezdxf (it decoded the old output as U+1F46 followed by "8");
+- names holding DXF control codes (\\U+0042, %%d) read back as written, and
+  no DXF string (text, layer) over the reference's 255 characters;
 - a brief whose targets fill the footprint exactly (read off a tiling,
   rounded to 6 decimals) is accepted by check and plan;
 - a folder given as the project is named as a folder;
 - a brief without rooms: check and plan agree (exit 3);
 - a control character in a name is refused with the field named;
+- a signal during a save: SIGTERM leaves no temporary file and the old
+  file; what SIGKILL leaves, the next save into that folder removes;
+- plan --time-limit holds for the whole run on a 200-room complete graph,
+  2,000 rooms with no adjacencies and a 3,000-room chain;
 - cut-outs: check --json names only the brief's rooms (it crashed on two
   cut-outs meeting edge to edge and on a comb of 200);
 - fixed rooms: a room that would have to be L-shaped beside a fixed one gets
@@ -124,6 +130,46 @@ with tempfile.TemporaryDirectory() as tmp:
     joined = " ".join(decode_dxf_unicode(e.dxf.text) for e in ezdxf.readfile(out).modelspace().query("TEXT"))
     expect("Play \ufffd room" in joined, f"DXF text of an emoji name: {joined!r}")
     expect("\u1f46" not in joined, "no U+1F46 from a misread escape")
+
+    # Strings a DXF reader treats specially, and strings past the reference's
+    # 255-character limit. Decoded as the reference says (Autodesk, "Control
+    # Codes and Special Characters Reference": %%d degree, %%p plus/minus,
+    # %%c diameter, %%% one percent sign) after ezdxf's \U+ decoder; ezdxf
+    # 0.18's own plain_text does not know %%%, so the codes are read here.
+    def reference_text(raw):
+        s, out, k = decode_dxf_unicode(raw), "", 0
+        while k < len(s):
+            if s.startswith("%%", k) and k + 2 < len(s) and s[k + 2].lower() in "dpc%":
+                out += {"d": "\u00b0", "p": "\u00b1", "c": "\u00d8", "%": "%"}[s[k + 2].lower()]
+                k += 3
+            else:
+                out += s[k]
+                k += 1
+        return out
+
+    specials = ["A\\U+0042", "50%%d", "100%", "a%%%b", "back\\slash %"]
+    long_name, long_id = "N" * 300, "i" * 100_000
+    rooms = [{"id": f"s{k}", "name": n, "area": 10} for k, n in enumerate(specials)]
+    rooms += [{"id": "long", "name": long_name, "area": 10, "category": "c" * 400},
+              {"id": long_id, "area": 10, "category": "c" * 399 + "d"}]
+    f = path("specials.abut.json")
+    json.dump(brief(rooms, (10, 7)), open(f, "w"))
+    out = path("specials.dxf")
+    r = run("export", f, "-o", out)
+    expect(r.returncode == 0, f"export special names: {r.stderr}")
+    doc = ezdxf.readfile(out)
+    expect(len(doc.audit().errors) == 0, "the DXF with special names audits clean")
+    texts = [reference_text(e.dxf.text) for e in doc.modelspace().query("TEXT")]
+    for n in specials:
+        expect(n in texts, f"DXF text of {n!r} read back as written: {texts[:12]!r}")
+    expect(any(t.startswith("N" * 200) and t.endswith("\u2026") for t in texts), "a 300-character name cut short with an ellipsis")
+    # Every string in the file, read as raw tags, within the limit.
+    from ezdxf.lldxf.tagger import ascii_tags_loader
+    with open(out, encoding="cp1252") as fh:
+        longest = max(len(str(t.value)) for t in ascii_tags_loader(fh))
+    expect(longest <= 255, f"no DXF string over 255 characters (longest {longest})")
+    layers = {e.dxf.layer for e in doc.modelspace() if e.dxftype() == "LWPOLYLINE"}
+    expect(sum(1 for l in layers if l.startswith("ROOM-CCC")) == 2, f"two long categories on two layers: {sorted(layers)[:4]}")
 
     # An exact fill: targets read off a 3 x 2 tiling of 11.3 x 10.12, rounded to 6 decimals.
     xs, ys = [0, 3.7, 7.9, 11.3], [0, 4.42, 10.12]
@@ -238,6 +284,63 @@ with tempfile.TemporaryDirectory() as tmp:
             tiles = [box(t["x"], t["y"], t["x"] + t["width"], t["y"] + t["depth"]) for t in v["rooms"] + v["spaces"]]
             expect(abs(unary_union(tiles).area - W * D) < 1e-6 * W * D and abs(sum(t.area for t in tiles) - W * D) < 1e-6 * W * D,
                    f"fixed rooms, brief {k}, variant {v['rank']}: the rooms do not tile the footprint")
+
+    # A signal during a save: SIGTERM removes the temporary file and the old
+    # file stays; what SIGKILL leaves behind goes at the next save there.
+    import signal
+    import time
+    folder = path("signal")
+    os.mkdir(folder)
+    out = os.path.join(folder, "plan.svg")
+    expect(run("export", small, "-o", out).returncode == 0, "first export before the signal")
+    before = open(out, "rb").read()
+
+    def leftovers():
+        return [n for n in os.listdir(folder) if n.startswith(".abut-save-")]
+
+    def stopped_during_save(sig):
+        e = dict(os.environ, QT_QPA_PLATFORM="offscreen", ABUT_TEST_WRITE_PAUSE="4000")
+        p = subprocess.Popen([cli, "export", small, "-o", out], env=e, stdout=subprocess.DEVNULL, stderr=subprocess.DEVNULL)
+        deadline = time.time() + 30
+        while not leftovers() and time.time() < deadline and p.poll() is None:
+            time.sleep(0.02)
+        seen = bool(leftovers())
+        p.send_signal(sig)
+        return seen, p.wait()
+
+    seen, rc = stopped_during_save(signal.SIGTERM)
+    expect(seen, "the save's temporary file was seen before the signal")
+    expect(rc == -signal.SIGTERM, f"SIGTERM during a save ends the program by that signal: {rc}")
+    expect(leftovers() == [], f"no temporary file left after SIGTERM: {leftovers()}")
+    expect(open(out, "rb").read() == before, "the old file is unchanged after SIGTERM")
+    seen, rc = stopped_during_save(signal.SIGKILL)
+    expect(seen and len(leftovers()) == 1, f"SIGKILL leaves the temporary file: {leftovers()}")
+    expect(run("export", small, "-o", out).returncode == 0, "export after the SIGKILL")
+    expect(leftovers() == [], f"the next save removes what SIGKILL left: {leftovers()}")
+
+    # Time limits cover the whole run, the preparation included: 200 rooms
+    # that must all touch (19,900 adjacencies, at most 594 of them planar),
+    # 2,000 rooms with no adjacencies, a chain of 3,000 rooms. The margin
+    # (a quarter of the limit, at least 1.5 s) is for the work after the
+    # clock runs out: the first plan's sizing and writing the file.
+    def timed_brief(name, n, pairs):
+        rooms = [{"id": f"r{k}", "area": 12} for k in range(n)]
+        side = (12 * n) ** 0.5
+        f = path(name + ".abut.json")
+        json.dump(brief(rooms, (side, side), pairs), open(f, "w"))
+        return f
+
+    for name, n, pairs, limit in [
+            ("complete200", 200, [(f"r{a}", f"r{b}") for a in range(200) for b in range(a + 1, 200)], 2),
+            ("apart2000", 2000, [], 2),
+            ("chain3000", 3000, [(f"r{k - 1}", f"r{k}") for k in range(1, 3000)], 5)]:
+        f = timed_brief(name, n, pairs)
+        started = time.monotonic()
+        r = run("plan", f, "-o", path(name + ".plan.json"), "--time-limit", str(limit))
+        took = time.monotonic() - started
+        expect(r.returncode in (0, 3), f"{name}: exit {r.returncode} {r.stderr[-200:]}")
+        expect(took <= limit + max(1.5, 0.25 * limit), f"{name}: --time-limit {limit} took {took:.1f} s")
+        print(f"{name}: --time-limit {limit}: {took:.2f} s, exit {r.returncode}")
 
 print(f"{len(failures)} failure(s)")
 sys.exit(1 if failures else 0)
