@@ -28,6 +28,7 @@ const char* toString(DiagnosticCode c) {
     case DiagnosticCode::OverFootprint: return "over-footprint";
     case DiagnosticCode::WiderThanFootprint: return "wider-than-footprint";
     case DiagnosticCode::NoRectangleFits: return "no-rectangle-fits";
+    case DiagnosticCode::ThinPart: return "thin-part";
     case DiagnosticCode::ShortDoorWall: return "short-door-wall";
     case DiagnosticCode::SketchCrossing: return "sketch-crossing";
     case DiagnosticCode::Unmet: return "unmet";

@@ -27,6 +27,7 @@ enum class DiagnosticCode {
     OverFootprint,      // targets add up to more than the footprint
     WiderThanFootprint, // a room's minimum width exceeds the footprint
     NoRectangleFits,    // a room larger than any rectangle beside the cut-outs and fixed rooms
+    ThinPart,           // a part of the footprint narrower than the shortest wall: no room can take it
     ShortDoorWall,      // door adjacencies with less than a door's width of wall
     SketchCrossing,     // adjacency lines that cross in the sketch
     Unmet,              // a requirement the plan on show does not meet

@@ -410,7 +410,7 @@ void plan(Planning& run) {
     plan.footprint = run.brief.effectiveFootprint();
     // A room no rectangle beside the cut-outs and fixed rooms can hold: proven, nothing to search.
     for (const Diagnostic& d : footprintProblems(run.given))
-        if (d.code == DiagnosticCode::NoRectangleFits) {
+        if (d.code == DiagnosticCode::NoRectangleFits || d.code == DiagnosticCode::ThinPart) {
             plan.status = PlanStatus::NoPlan;
             plan.summary = "No rectangular plan exists: " + d.message;
             plan.diagnostics.push_back(d);
