@@ -91,7 +91,8 @@ struct Verifier {
     int meets(const Brief& changed, const Footprint& changedFp, const UnmetItem& item, bool strict = true,
               bool replan = false) const {
         if (haveDeadline && Clock::now() >= deadline) return 0; // out of time: not verified, not offered
-        const SizingProblem problem(changed, v.extended, v.labeling, changedFp, planSizingOptions(changed));
+        SizingProblem problem(changed, v.extended, v.labeling, changedFp, planSizingOptions(changed));
+        if (haveDeadline) problem.setDeadline(deadline); // a sizing of thousands of rooms takes seconds
         SizingResult r;
         if (changedFp == fp) {
             const SizingResult start = problem.stateOf(vertexRects(v));

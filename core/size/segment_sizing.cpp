@@ -407,6 +407,10 @@ void SizingProblem::Solve::newton(bool warm) {
     const int maxSteps = p.options_.maxNewtonSteps;
     while (steps < maxSteps) {
         for (int inner = 0; inner < 60 && steps < maxSteps; ++inner, ++steps) {
+            if (p.deadline_ && std::chrono::steady_clock::now() >= *p.deadline_) {
+                result.newtonSteps = steps;
+                return;
+            }
             residuals(true);
             std::vector<Eigen::Triplet<double>> trip;
             Eigen::VectorXd grad = Eigen::VectorXd::Zero(nv);

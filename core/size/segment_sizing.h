@@ -29,6 +29,7 @@
 #include "brief/requirement_kind.h"
 #include "dual/rectangular_dual.h"
 
+#include <chrono>
 #include <optional>
 #include <string>
 #include <vector>
@@ -131,6 +132,10 @@ public:
     // what it has instead: sizing then improves the areas without forcing
     // them, and the layout's shortfalls stay (and are reported as unmet).
     void holdMinimumsAt(const SizingResult& layout);
+    // Newton steps stop at this moment (the layout so far is kept: every
+    // hard requirement it met stays met); for work under a time limit, such
+    // as checking what must give on thousands of rooms. Default: none.
+    void setDeadline(std::chrono::steady_clock::time_point at) { deadline_ = at; }
 
 private:
     // coordinate[to] − coordinate[from] ≥ min on one axis; `vertex` is the
@@ -149,6 +154,7 @@ private:
     std::vector<double> preferred_; // per vertex, 0 = none
     std::vector<double> cap_;       // per gap: a lower minimum held (holdMinimumsAt)
     std::vector<double> wallMin_; // per wall of segs_
+    std::optional<std::chrono::steady_clock::time_point> deadline_;
 };
 
 } // namespace abut
