@@ -58,6 +58,16 @@ bool partition(const ZoneTree& t, std::size_t rooms) {
     return std::all_of(seen.begin(), seen.end(), [](int n) { return n == 1; });
 }
 
+// A floor of suites with its search problem and zones.
+struct SuiteFloor {
+    explicit SuiteFloor(int per)
+        : b(suites(per)), fp(*b.footprint), p(detail::makeProblem(b, fp, SearchOptions{})), t(formZones(b)) {}
+    Brief b;
+    Footprint fp;
+    detail::SearchProblem p;
+    ZoneTree t;
+};
+
 // The rectangles `t` gives the blocks of `p`.
 std::vector<Rect> layoutOf(const FloorTree& t, const detail::SearchProblem& p) {
     std::vector<Rect> rects;
@@ -147,33 +157,27 @@ private slots:
     }
 
     void aRunLaidOutAsOneLineMeetsItsDoors() {
-        const Brief b = suites(4);
-        const Footprint fp = *b.footprint;
-        const detail::SearchProblem p = detail::makeProblem(b, fp, SearchOptions{});
-        const ZoneTree t = formZones(b);
-        detail::ZonePlanner planner(p, t, 1);
-        const detail::ZonePlanner::Level l = planner.level(0, p.outer);
+        const SuiteFloor f(4);
+        detail::ZonePlanner planner(f.p, f.t, 1);
+        const detail::ZonePlanner::Level l = planner.level(0, f.p.outer);
         QCOMPARE(l.run.size(), std::size_t(2));
         const FloorTree line = detail::ZonePlanner::runStrip(l);
         QVERIFY(line.valid());
         const std::vector<Rect> rects = layoutOf(line, l.problem);
-        QVERIFY(tilingProblem(rects, fp.width, fp.depth).isEmpty());
+        QVERIFY(tilingProblem(rects, f.fp.width, f.fp.depth).isEmpty());
         // Every suite on its piece with a door-wide wall, the pieces meeting, every facade met.
         QCOMPARE(detail::evaluate(l.problem, rects, nullptr).hard, 0);
     }
 
     void aZonePlanTilesTheFloor() {
-        const Brief b = suites(5);
-        const Footprint fp = *b.footprint;
-        const detail::SearchProblem p = detail::makeProblem(b, fp, SearchOptions{});
-        const ZoneTree t = formZones(b);
-        detail::ZonePlanner planner(p, t, 3);
+        const SuiteFloor f(5);
+        detail::ZonePlanner planner(f.p, f.t, 3);
         planner.plan();
         const FloorTree tree = planner.tree();
         QVERIFY(tree.valid());
-        const std::vector<Rect> rects = layoutOf(tree, p);
-        QVERIFY(tilingProblem(rects, fp.width, fp.depth).isEmpty());
-        QCOMPARE(detail::evaluate(p, rects, nullptr).hard, 0); // an easy floor: met as planned
+        const std::vector<Rect> rects = layoutOf(tree, f.p);
+        QVERIFY(tilingProblem(rects, f.fp.width, f.fp.depth).isEmpty());
+        QCOMPARE(detail::evaluate(f.p, rects, nullptr).hard, 0); // an easy floor: met as planned
     }
 };
 
