@@ -18,6 +18,7 @@ py_hostile_input):
 - a folder given as the project is named as a folder;
 - a brief without rooms: check and plan agree (exit 3);
 - a control character in a name is refused with the field named;
+- the editor's --screenshot on a full disk keeps the old PNG whole;
 - a signal during a save: SIGTERM leaves no temporary file and the old
   file; what SIGKILL leaves, the next save into that folder removes;
 - a footprint with a part narrower than the shortest wall (a 1 nm strip, a
@@ -30,11 +31,12 @@ py_hostile_input):
   no plan with that reason (exit 3, not an internal error), and on small
   random briefs every variant holds its fixed rooms exactly (shapely tiles).
 
-    /usr/bin/python3 tests/python/check_hostile.py ABUT_CLI
+    /usr/bin/python3 tests/python/check_hostile.py ABUT_CLI [--editor ABUT]
 """
 import csv
 import json
 import os
+import resource
 import stat
 import subprocess
 import sys
@@ -44,6 +46,7 @@ import ezdxf
 from ezdxf.lldxf.encoding import decode_dxf_unicode
 
 cli = sys.argv[1]
+editor = sys.argv[sys.argv.index("--editor") + 1] if "--editor" in sys.argv else None
 failures = []
 
 
@@ -304,6 +307,22 @@ with tempfile.TemporaryDirectory() as tmp:
         expect(c.returncode == 3 and "part only" in c.stdout, f"{name}: check exit {c.returncode}: {c.stdout[-300:]}")
         expect(p.returncode == 3 and "part only" in p.stdout + p.stderr, f"{name}: plan exit {p.returncode}: {p.stdout[-300:]} {p.stderr[-300:]}")
 
+    # The editor's screenshot on a full disk: exit 2, the old PNG whole
+    # (read back: it still ends with its IEND chunk, PNG specification 5.6).
+    if editor:
+        shot = path("shot.png")
+        e = dict(os.environ, QT_QPA_PLATFORM="offscreen")
+        r = subprocess.run([editor, "--screenshot", shot, "--size", "400x300", small], capture_output=True, env=e)
+        expect(r.returncode == 0 and os.path.exists(shot), f"editor screenshot: exit {r.returncode}")
+        if os.path.exists(shot):
+            old = open(shot, "rb").read()
+            e["ABUT_TEST_WRITE_FAULT"] = "100"
+            r = subprocess.run([editor, "--screenshot", shot, "--size", "600x400", small], capture_output=True, text=True, env=e)
+            expect(r.returncode == 2 and "previous file is unchanged" in r.stderr,
+                   f"editor screenshot on a full disk: exit {r.returncode} {r.stderr[-200:]}")
+            now = open(shot, "rb").read()
+            expect(now == old and now[-8:-4] == b"IEND", "the old screenshot is whole after the full disk")
+
     # A signal during a save: SIGTERM removes the temporary file and the old
     # file stays; what SIGKILL leaves behind goes at the next save there.
     import signal
@@ -339,10 +358,11 @@ with tempfile.TemporaryDirectory() as tmp:
 
     # Time limits cover the whole run, the preparation included: 200 rooms
     # that must all touch (19,900 adjacencies, at most 594 of them planar),
-    # 2,000 rooms with no adjacencies, a chain of 3,000 rooms, on one thread
-    # (the test may share the machine with another). The margin (half the
-    # limit, at least 2 s) is for the work after the clock runs out: the
-    # first plan's sizing and writing the file (0.6 s on the chain alone).
+    # 2,000 rooms with no adjacencies, a chain of 3,000 rooms, on one thread.
+    # The margin (0.4 of the limit, at least 2 s of processor time) is for
+    # the work after the clock runs out: writing the file, and on a busy
+    # machine the sizing of a first plan found only then (0.1-0.2 s past the
+    # limit on an idle one; the unbounded steps this caught took 20-50 s).
     def timed_brief(name, n, pairs):
         rooms = [{"id": f"r{k}", "area": 12} for k in range(n)]
         side = (12 * n) ** 0.5
@@ -355,12 +375,22 @@ with tempfile.TemporaryDirectory() as tmp:
             ("apart2000", 2000, [], 2),
             ("chain3000", 3000, [(f"r{k - 1}", f"r{k}") for k in range(1, 3000)], 5)]:
         f = timed_brief(name, n, pairs)
+        before = resource.getrusage(resource.RUSAGE_CHILDREN)
         started = time.monotonic()
         r = run("plan", f, "-o", path(name + ".plan.json"), "--time-limit", str(limit), "--threads", "1")
         took = time.monotonic() - started
+        after = resource.getrusage(resource.RUSAGE_CHILDREN)
+        cpu = (after.ru_utime - before.ru_utime) + (after.ru_stime - before.ru_stime)
+        # On a shared machine the run gets a share of a core (cpu / took), and
+        # the work after the limit stretches by its inverse: what is measured
+        # is that work, (took - limit) at that share, so that a busy machine
+        # does not fail the test and an unbounded step still does.
+        share = min(1.0, cpu / took) if took > 0 else 1.0
+        over = max(0.0, took - limit) * share
         expect(r.returncode in (0, 3), f"{name}: exit {r.returncode} {r.stderr[-200:]}")
-        expect(took <= limit + max(2.0, 0.5 * limit), f"{name}: --time-limit {limit} took {took:.1f} s")
-        print(f"{name}: --time-limit {limit}: {took:.2f} s, exit {r.returncode}")
+        expect(over <= max(2.0, 0.4 * limit),
+               f"{name}: --time-limit {limit} took {took:.1f} s ({cpu:.1f} s of processor; {over:.1f} s past the limit)")
+        print(f"{name}: --time-limit {limit}: {took:.2f} s, {cpu:.2f} s of processor, exit {r.returncode}")
 
 print(f"{len(failures)} failure(s)")
 sys.exit(1 if failures else 0)
